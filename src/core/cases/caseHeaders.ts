@@ -1,0 +1,122 @@
+/**
+ * Case headers: "D", "W:N", "E:x" — a load symbol of the ruleset, optionally
+ * followed by ":" and the case's own name. A map can assign any other header to
+ * a symbol, and change how a symbol's several cases combine.
+ */
+import { cellText, isBlank, type Cell } from "../cells.js";
+import { columnLetters, fail, ok, problem, type Problem, type Result } from "../problems.js";
+import type { CaseMode, Ruleset } from "../ruleset/model.js";
+import { nearest } from "../text/nearest.js";
+
+export interface LoadCase {
+  /** The header as written. */
+  header: string;
+  symbol: string;
+}
+
+export interface CaseMap {
+  /** Header → symbol, for headers that are not written SYMBOL or SYMBOL:name. */
+  symbolOf: ReadonlyMap<string, string>;
+  /** Symbol → how its cases combine, overriding the ruleset. */
+  modes: ReadonlyMap<string, CaseMode>;
+}
+
+export const EMPTY_CASE_MAP: CaseMap = { symbolOf: new Map(), modes: new Map() };
+
+const MODES: readonly CaseMode[] = ["sum", "each", "orthogonal"];
+
+/** The symbol a header names, or a problem naming the header and the symbols there are. */
+export function symbolOfHeader(header: string, ruleset: Ruleset, map: CaseMap = EMPTY_CASE_MAP): { symbol: string } | { error: string } {
+  const mapped = map.symbolOf.get(header);
+  if (mapped !== undefined) return { symbol: mapped };
+  const colon = header.indexOf(":");
+  const symbol = (colon < 0 ? header : header.slice(0, colon)).trim();
+  if (colon >= 0 && header.slice(colon + 1).trim() === "") {
+    return { error: `case header "${header}" has nothing after ":"; write ${symbol}:name, e.g. ${symbol}:1` };
+  }
+  if (ruleset.symbolByName.has(symbol)) return { symbol };
+  const known = ruleset.symbols.map((s) => s.name);
+  const guess = nearest(symbol, known);
+  return {
+    error:
+      `case header "${header}" names no load symbol of ${ruleset.file.id}` +
+      (guess ? `; did you mean "${guess}"?` : "") +
+      ` (symbols: ${known.join(", ")}; write SYMBOL or SYMBOL:name, or assign the header in a case map)`,
+  };
+}
+
+/** Headers in order; `at(i)` says where header i is, for the problem's place. */
+export function readCaseHeaders(
+  headers: Cell[],
+  ruleset: Ruleset,
+  map: CaseMap,
+  at: (i: number) => { row: number; column: number },
+): Result<LoadCase[]> {
+  const problems: Problem[] = [];
+  const cases: LoadCase[] = [];
+  const firstSeen = new Map<string, number>();
+  headers.forEach((cell, i) => {
+    const header = cellText(cell);
+    const place = at(i);
+    if (header === "") {
+      problems.push(problem("cases-header", "the case header is empty", place));
+      return;
+    }
+    const before = firstSeen.get(header);
+    if (before !== undefined) {
+      const b = at(before);
+      problems.push(
+        problem("cases-duplicate-header", `case header "${header}" appears twice (also at ${b.row === place.row ? "column" : "row"} ${b.row === place.row ? columnLetters(b.column) : b.row + 1})`, { ...place, header }),
+      );
+      return;
+    }
+    firstSeen.set(header, i);
+    const resolved = symbolOfHeader(header, ruleset, map);
+    if ("error" in resolved) {
+      problems.push(problem("cases-unknown-symbol", resolved.error, { ...place, header }));
+      return;
+    }
+    cases.push({ header, symbol: resolved.symbol });
+  });
+  return problems.length > 0 ? fail(...problems) : ok(cases);
+}
+
+/**
+ * A case map range: rows of [header, symbol] to assign a header to a symbol, or
+ * [symbol, sum|each|orthogonal] to change how that symbol's cases combine.
+ */
+export function readCaseMap(rows: Cell[][], ruleset: Ruleset): Result<CaseMap> {
+  const symbolOf = new Map<string, string>();
+  const modes = new Map<string, CaseMode>();
+  const problems: Problem[] = [];
+  rows.forEach((row, r) => {
+    if (row.every(isBlank)) return;
+    const first = cellText(row[0]);
+    const second = cellText(row[1]);
+    if (first === "" || second === "") {
+      problems.push(problem("cases-map", "a case map row needs two cells: [header, symbol] or [symbol, sum|each|orthogonal]", { row: r, column: first === "" ? 0 : 1 }));
+      return;
+    }
+    const mode = second.toLowerCase();
+    if ((MODES as readonly string[]).includes(mode)) {
+      if (!ruleset.symbolByName.has(first)) {
+        problems.push(problem("cases-map", `"${first}" is not a load symbol of ${ruleset.file.id} (symbols: ${ruleset.symbols.map((s) => s.name).join(", ")})`, { row: r, column: 0 }));
+        return;
+      }
+      modes.set(first, mode as CaseMode);
+      return;
+    }
+    if (!ruleset.symbolByName.has(second)) {
+      problems.push(
+        problem("cases-map", `"${second}" is neither a load symbol of ${ruleset.file.id} nor sum, each or orthogonal`, { row: r, column: 1 }),
+      );
+      return;
+    }
+    if (symbolOf.has(first)) {
+      problems.push(problem("cases-map", `header "${first}" is assigned twice`, { row: r, column: 0 }));
+      return;
+    }
+    symbolOf.set(first, second);
+  });
+  return problems.length > 0 ? fail(...problems) : ok({ symbolOf, modes });
+}

@@ -1,0 +1,168 @@
+/**
+ * A table of load-case results, in either orientation:
+ *
+ *   cases as rows (a reactions table)        cases as columns (an analysis export)
+ *   ┌──────┬─────┬─────┐                    ┌────────┬─────┬─────┬─────┐
+ *   │      │  N  │  V  │  ← components      │ result │  D  │  L  │ W:N │  ← cases
+ *   │ D    │ 120 │ 4.0 │                    │ C1 top │ 120 │  80 │ -15 │
+ *   │ W:N  │ -15 │ 9.0 │                    │ C1 bot │ 125 │  80 │ -30 │
+ *   └──────┴─────┴─────┘                    └────────┴─────┴─────┴─────┘
+ *
+ * Internally both become values[component][case], where a "component" is a
+ * result row of a cases-as-columns table. Blank value cells read as zero.
+ */
+import { cellText, DECIMAL_TEXT, isBlank, type Cell } from "../cells.js";
+import { fail, ok, problem, type Problem, type Result } from "../problems.js";
+import type { Ruleset } from "../ruleset/model.js";
+import { EMPTY_CASE_MAP, readCaseHeaders, symbolOfHeader, type CaseMap, type LoadCase } from "./caseHeaders.js";
+
+export type Orientation = "rows" | "columns";
+
+export interface CaseTable {
+  orientation: Orientation;
+  cases: LoadCase[];
+  /** Component names (cases as rows) or result-row ids (cases as columns). */
+  components: string[];
+  /** values[component][case] */
+  values: Float64Array[];
+  map: CaseMap;
+}
+
+export interface CaseTableOptions {
+  /** "auto" (default) reads the orientation off the headers where only one reading fits. */
+  orientation?: Orientation | "auto";
+  /** Cases as columns: how many leading columns identify a result row (default 1). */
+  idColumns?: number;
+  map?: CaseMap;
+  /** Accept numbers written as text ("12.5"): right for CSV files, wrong for worksheet cells. */
+  numbersAsText?: boolean;
+}
+
+export function readCaseTable(matrix: Cell[][], ruleset: Ruleset, options: CaseTableOptions = {}): Result<CaseTable> {
+  const map = options.map ?? EMPTY_CASE_MAP;
+  const idColumns = options.idColumns ?? 1;
+  const rows = trimBlankEdges(matrix);
+  const width = Math.max(0, ...rows.map((r) => r.length));
+  if (rows.length < 2 || width < 2) {
+    return fail(problem("cases-empty", "the case table needs a header row, a header column and at least one value"));
+  }
+  const raggedAt = rows.findIndex((r) => r.length !== width);
+  if (raggedAt >= 0) {
+    return fail(problem("cases-ragged", `row ${raggedAt + 1} has ${rows[raggedAt].length} cells where the header row has ${width}`, { row: raggedAt }));
+  }
+  let orientation = options.orientation ?? "auto";
+  if (orientation === "auto") {
+    const decided = detectOrientation(rows, ruleset, map, idColumns);
+    if (!decided.ok) return decided;
+    orientation = decided.value;
+  }
+  return orientation === "rows" ? readCasesAsRows(rows, ruleset, map, options) : readCasesAsColumns(rows, ruleset, map, idColumns, options);
+}
+
+/** Drop fully blank rows at the end and fully blank columns at the right (a generously selected range). */
+function trimBlankEdges(matrix: Cell[][]): Cell[][] {
+  let rows = matrix.length;
+  while (rows > 0 && matrix[rows - 1].every(isBlank)) rows--;
+  let width = Math.max(0, ...matrix.slice(0, rows).map((r) => r.length));
+  while (width > 0 && matrix.slice(0, rows).every((r) => isBlank(r[width - 1]))) width--;
+  return matrix.slice(0, rows).map((r) => (r.length > width ? r.slice(0, width) : r));
+}
+
+function detectOrientation(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idColumns: number): Result<Orientation> {
+  const reads = (cells: Cell[]) => cells.length > 0 && cells.every((c) => !("error" in symbolOfHeader(cellText(c), ruleset, map)));
+  const firstRow = rows[0].slice(idColumns);
+  const firstColumn = rows.slice(1).map((r) => r[0]).filter((c) => !isBlank(c));
+  const asColumns = reads(firstRow);
+  const asRows = reads(firstColumn);
+  if (asColumns && !asRows) return ok("columns");
+  if (asRows && !asColumns) return ok("rows");
+  if (asRows && asColumns) {
+    return fail(problem("cases-orientation", "both the first row and the first column read as load cases; say which holds the cases (orientation rows or columns)"));
+  }
+  const symbols = ruleset.symbols.map((s) => s.name).join(", ");
+  return fail(
+    problem(
+      "cases-orientation",
+      `neither the first row nor the first column holds load cases: headers must be a load symbol (${symbols}) or SYMBOL:name, e.g. W:N`,
+    ),
+  );
+}
+
+function readCasesAsRows(rows: Cell[][], ruleset: Ruleset, map: CaseMap, options: CaseTableOptions): Result<CaseTable> {
+  const problems: Problem[] = [];
+  const body = rows.slice(1).map((r, i) => ({ cells: r, row: i + 1 })).filter((r) => !r.cells.every(isBlank));
+  const headers = readCaseHeaders(body.map((r) => r.cells[0]), ruleset, map, (i) => ({ row: body[i].row, column: 0 }));
+  if (!headers.ok) problems.push(...headers.problems);
+  const components = componentNames(rows[0].slice(1), (i) => ({ row: 0, column: i + 1 }), problems);
+  if (problems.length > 0 || !headers.ok) return fail(...problems);
+  const values = components.map(() => new Float64Array(body.length));
+  body.forEach((r, k) => {
+    for (let c = 0; c < components.length; c++) {
+      const v = readValue(r.cells[c + 1], { row: r.row, column: c + 1 }, `${headers.value[k].header} / ${components[c]}`, options, problems);
+      values[c][k] = v;
+    }
+  });
+  if (problems.length > 0) return fail(...problems);
+  return ok({ orientation: "rows", cases: headers.value, components, values, map });
+}
+
+function readCasesAsColumns(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idColumns: number, options: CaseTableOptions): Result<CaseTable> {
+  const problems: Problem[] = [];
+  const headers = readCaseHeaders(rows[0].slice(idColumns), ruleset, map, (i) => ({ row: 0, column: i + idColumns }));
+  if (!headers.ok) return headers;
+  const cases = headers.value;
+  const components: string[] = [];
+  const values: Float64Array[] = [];
+  for (let r = 1; r < rows.length; r++) {
+    const cells = rows[r];
+    if (cells.every(isBlank)) continue;
+    const id = cells.slice(0, idColumns).map(cellText).filter((t) => t !== "").join(" / ") || `row ${r + 1}`;
+    const vector = new Float64Array(cases.length);
+    for (let k = 0; k < cases.length; k++) {
+      vector[k] = readValue(cells[k + idColumns], { row: r, column: k + idColumns }, `${id} / ${cases[k].header}`, options, problems);
+    }
+    components.push(id);
+    values.push(vector);
+  }
+  if (problems.length > 0) return fail(...problems);
+  if (components.length === 0) return fail(problem("cases-empty", "the case table has no result rows"));
+  return ok({ orientation: "columns", cases, components, values, map });
+}
+
+function componentNames(cells: Cell[], at: (i: number) => { row: number; column: number }, problems: Problem[]): string[] {
+  const names: string[] = [];
+  const seen = new Map<string, number>();
+  cells.forEach((cell, i) => {
+    const name = cellText(cell);
+    if (name === "") problems.push(problem("cases-header", "the component header is empty", at(i)));
+    else if (seen.has(name)) problems.push(problem("cases-duplicate-header", `component "${name}" appears twice`, { ...at(i), header: name }));
+    seen.set(name, i);
+    names.push(name);
+  });
+  return names;
+}
+
+/** One value cell: a finite number, or blank (zero). Anything else is a located problem. */
+export function readValue(
+  cell: Cell,
+  place: { row: number; column: number },
+  header: string,
+  options: CaseTableOptions,
+  problems: Problem[],
+): number {
+  if (typeof cell === "number") {
+    if (Number.isFinite(cell)) return cell;
+    problems.push(problem("cases-not-a-number", `${cell} is not a finite number`, { ...place, header }));
+    return 0;
+  }
+  if (isBlank(cell)) return 0;
+  if (typeof cell === "string") {
+    const text = cell.trim();
+    if (options.numbersAsText && DECIMAL_TEXT.test(text)) return Number(text);
+    const hint = /^[+-]?[\d.,]+$/.test(text) ? " (a number stored as text? convert it)" : "";
+    problems.push(problem("cases-not-a-number", `"${text}" is not a number${hint}`, { ...place, header }));
+    return 0;
+  }
+  problems.push(problem("cases-not-a-number", `${String(cell).toUpperCase()} is not a number`, { ...place, header }));
+  return 0;
+}

@@ -1,0 +1,130 @@
+/**
+ * Concrete rows: naming them, valuing them, listing them. A row's label is the
+ * combination id and the factor on every case it loads, with the leading action
+ * and the terms left out, so that a checker can re-derive any value by hand:
+ *
+ *   4: 1.2D + W:N + L + 0.5S
+ *   2: 1.2D + 1.6L [absent: 0.5(Lr or S or R)]
+ *   6.10: 1.35G + 1.5Q + 0.75S [Q leading; absent: W]
+ */
+import type { CaseTable } from "../cases/readCaseTable.js";
+import { fail, ok, problem, type Result } from "../problems.js";
+import { formatNumber } from "../plan/factor.js";
+import type { Contribution, Plan, RowRef, TermOption } from "../plan/types.js";
+
+/** The value of one option for one vector of case values. Fast and exhaustive paths both sum this way. */
+export function optionValue(option: TermOption, x: ArrayLike<number>): number {
+  let v = 0;
+  for (const c of option.contributions) v += c.factor * x[c.caseIndex];
+  return v;
+}
+
+export function rowValue(plan: Plan, ref: RowRef, x: ArrayLike<number>): number {
+  const branch = plan.combinations[ref.combination].branches[ref.branch];
+  let v = 0;
+  for (let t = 0; t < branch.terms.length; t++) v += optionValue(branch.terms[t].options[ref.choices[t]], x);
+  return v;
+}
+
+/** Every factor the row puts on a case, in case order; factors on one case from several terms are added. */
+export function rowContributions(plan: Plan, ref: RowRef): Contribution[] {
+  const branch = plan.combinations[ref.combination].branches[ref.branch];
+  const byCase = new Map<number, Contribution>();
+  branch.terms.forEach((term, t) => {
+    for (const c of term.options[ref.choices[t]].contributions) {
+      const before = byCase.get(c.caseIndex);
+      byCase.set(c.caseIndex, before ? { caseIndex: c.caseIndex, factor: before.factor + c.factor, why: `${before.why} + ${c.why}` } : c);
+    }
+  });
+  return [...byCase.values()].filter((c) => c.factor !== 0).sort((a, b) => a.caseIndex - b.caseIndex);
+}
+
+/** The row's factors in the ruleset's symbol order, with the cases of a summed symbol shown as the symbol. */
+export function rowFactorText(plan: Plan, ref: RowRef): string {
+  const factors = new Map(rowContributions(plan, ref).map((c) => [c.caseIndex, c.factor]));
+  const parts: { factor: number; name: string }[] = [];
+  for (const symbol of plan.ruleset.symbols) {
+    const indices = (plan.casesOf.get(symbol.name) ?? []).filter((i) => factors.has(i));
+    if (indices.length === 0) continue;
+    const all = plan.casesOf.get(symbol.name) ?? [];
+    const first = factors.get(indices[0]) as number;
+    if (indices.length === all.length && indices.length > 1 && indices.every((i) => factors.get(i) === first)) {
+      parts.push({ factor: first, name: symbol.name });
+      continue;
+    }
+    for (const i of indices) parts.push({ factor: factors.get(i) as number, name: plan.cases[i].header });
+  }
+  if (parts.length === 0) return "(no load)";
+  return parts
+    .map((p, k) => {
+      const size = Math.abs(p.factor);
+      const coefficient = size === 1 ? "" : formatNumber(size);
+      const sign = p.factor < 0 ? (k === 0 ? "-" : " - ") : k === 0 ? "" : " + ";
+      return `${sign}${coefficient}${p.name}`;
+    })
+    .join("");
+}
+
+export function rowLabel(plan: Plan, ref: RowRef): string {
+  const planned = plan.combinations[ref.combination];
+  const branch = planned.branches[ref.branch];
+  const absent = branch.terms.filter((term, t) => term.options[ref.choices[t]].absent).map((t) => t.text);
+  const leaderAbsent = branch.leader !== undefined && branch.terms[branch.leader.term].options[ref.choices[branch.leader.term]].absent;
+  const notes: string[] = [];
+  if (branch.note && !leaderAbsent) notes.push(branch.note);
+  if (absent.length > 0) notes.push(`absent: ${absent.join(", ")}`);
+  return `${planned.combination.id}: ${rowFactorText(plan, ref)}${notes.length > 0 ? ` [${notes.join("; ")}]` : ""}`;
+}
+
+/** All rows in order: combinations, then branches, then options with the first term outermost. */
+export function* enumerateRows(plan: Plan): Generator<RowRef> {
+  for (let c = 0; c < plan.combinations.length; c++) {
+    const branches = plan.combinations[c].branches;
+    for (let b = 0; b < branches.length; b++) {
+      const sizes = branches[b].terms.map((t) => t.options.length);
+      if (sizes.some((n) => n === 0)) continue;
+      const choices = sizes.map(() => 0);
+      for (;;) {
+        yield { combination: c, branch: b, choices: [...choices] };
+        let t = sizes.length - 1;
+        while (t >= 0 && ++choices[t] === sizes[t]) choices[t--] = 0;
+        if (t < 0) break;
+      }
+    }
+  }
+}
+
+/** Default cap on listing rows one by one; the envelope never lists and has no such cap. */
+export const DEFAULT_ROW_LIMIT = 200_000;
+
+/** Every row, or a problem that says how many there would be. */
+export function listRows(plan: Plan, limit = DEFAULT_ROW_LIMIT): Result<RowRef[]> {
+  if (plan.rowCount > limit) return fail(tooManyRows(plan.rowCount, limit));
+  return ok([...enumerateRows(plan)]);
+}
+
+export function tooManyRows(count: number, limit: number) {
+  return problem(
+    "too-many-rows",
+    `the ruleset expands to ${count.toLocaleString("en-US")} concrete rows for this case table, more than the limit of ${limit.toLocaleString("en-US")}; use the envelope or governing rows by max/min (exact without listing every row), or the command line`,
+  );
+}
+
+/** Labels compare with typographic minus signs and extra spaces forgiven. */
+export function sameLabel(a: string, b: string): boolean {
+  const norm = (s: string) => s.replace(/[\u2212\u2013]/g, "-").replace(/\s+/g, " ").trim();
+  return norm(a) === norm(b);
+}
+
+/** Each component's value in one row. */
+export function rowValues(plan: Plan, table: CaseTable, ref: RowRef): number[] {
+  return table.values.map((x) => rowValue(plan, ref, x));
+}
+
+export function noRows(plan: Plan) {
+  const skipped = plan.combinations.filter((c) => c.skipped).map((c) => `${c.combination.id} (${c.skipped})`);
+  return problem(
+    "unknown-row",
+    `no combination of ${plan.ruleset.file.id} applies to this case table${skipped.length ? `: ${skipped.join("; ")}` : ""}`,
+  );
+}

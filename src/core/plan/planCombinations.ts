@@ -1,0 +1,339 @@
+/**
+ * Resolves a ruleset for one parameter set and one list of cases into a Plan.
+ *
+ * A combination's terms choose independently (which alternative, which sign,
+ * which case of a symbol, left out or not), except for choices several terms
+ * share: which action leads in lead(…)/others, and the case and direction of a
+ * symbol written more than once. Those shared choices are enumerated as
+ * branches; within a branch each term keeps its own list of options, so the
+ * worst row is found term by term without enumerating the product.
+ */
+import type { Body, Sum, Term } from "../expression/ast.js";
+import type { ParameterValues } from "../params/resolveParameters.js";
+import { fail, ok, problem, type Problem, type Result } from "../problems.js";
+import type { CaseMode, Combination, LoadSymbol, Ruleset } from "../ruleset/model.js";
+import { choiceAssignments, evaluateFactor, FactorError, factorText, type ChoiceAssignment } from "./factor.js";
+import { symbolStates, type SymbolState } from "./symbolStates.js";
+import type { Branch, Contribution, Plan, PlanCase, PlannedCombination, PlannedTerm, TermOption } from "./types.js";
+import type { Arith } from "../expression/ast.js";
+
+/** Shared choices beyond this many branches per combination are refused (the row count would be absurd anyway). */
+export const MAX_BRANCHES = 100_000;
+
+export interface PlanInput {
+  /** Case headers in table order; null plans one case per symbol, named by the symbol (for listing combinations). */
+  cases: PlanCase[] | null;
+  /** Symbol → how its cases combine, overriding the ruleset (from a case map). */
+  modes?: ReadonlyMap<string, CaseMode>;
+}
+
+export function planCombinations(ruleset: Ruleset, parameters: ParameterValues, input: PlanInput): Result<Plan> {
+  const supplied = input.cases !== null;
+  const cases: PlanCase[] = input.cases ?? ruleset.symbols.map((s) => ({ header: s.name, symbol: s.name }));
+  const casesOf = new Map<string, number[]>(ruleset.symbols.map((s) => [s.name, []]));
+  cases.forEach((c, i) => casesOf.get(c.symbol)?.push(i));
+
+  const problems: Problem[] = [];
+  const stateCache = new Map<string, SymbolState[]>();
+  const statesOf = (name: string): SymbolState[] => {
+    const cached = stateCache.get(name);
+    if (cached) return cached;
+    const symbol = ruleset.symbolByName.get(name) as LoadSymbol;
+    const mode = input.modes?.get(name) ?? symbol.cases;
+    const share = typeof symbol.orthogonalShare === "number" ? symbol.orthogonalShare : (parameters.numbers.get(symbol.orthogonalShare) ?? NaN);
+    const states = symbolStates(symbol, casesOf.get(name) ?? [], mode, share);
+    if (!states.ok) throw new StateLimit(states.problems);
+    stateCache.set(name, states.value);
+    return states.value;
+  };
+
+  const combinations: PlannedCombination[] = [];
+  for (const combination of ruleset.combinations) {
+    try {
+      const planned = planOne(combination, ruleset, parameters, statesOf, casesOf, supplied);
+      if (!planned.ok) problems.push(...planned.problems);
+      else combinations.push(planned.value);
+    } catch (e) {
+      if (e instanceof StateLimit) problems.push(...e.problems.map((p) => ({ ...p, place: { ...p.place, entry: combination.id } })));
+      else if (e instanceof FactorError) problems.push(problem("expression-not-finite", e.message, { entry: combination.id, position: e.position }));
+      else throw e;
+    }
+  }
+  if (problems.length > 0) return fail(...problems);
+  const rowCount = combinations.reduce((n, c) => n + c.rowCount, 0);
+  return ok({ ruleset, parameters, cases, casesOf, combinations, rowCount });
+}
+
+class StateLimit extends Error {
+  constructor(readonly problems: Problem[]) {
+    super("state limit");
+  }
+}
+
+interface Context {
+  ruleset: Ruleset;
+  parameters: ParameterValues;
+  expression: string;
+  statesOf: (symbol: string) => SymbolState[];
+  /** Symbol → the state every occurrence takes in this branch. */
+  shared: ReadonlyMap<string, SymbolState>;
+  leader: string | null;
+}
+
+interface StackEntry {
+  factor: Arith;
+  choice: ChoiceAssignment;
+}
+
+function planOne(
+  combination: Combination,
+  ruleset: Ruleset,
+  parameters: ParameterValues,
+  statesOf: (symbol: string) => SymbolState[],
+  casesOf: ReadonlyMap<string, number[]>,
+  supplied: boolean,
+): Result<PlannedCombination> {
+  const { sum, expression } = combination;
+  const leadTerm = sum.terms.find((t) => t.body.kind === "lead");
+  const leadSymbols = leadTerm?.body.kind === "lead" ? leadTerm.body.symbols.map((s) => s.name) : [];
+  const used = symbolsOfSum(sum, leadSymbols);
+  const hasCases = (s: string) => (casesOf.get(s)?.length ?? 0) > 0;
+  const notSupplied = supplied ? used.filter((s) => !hasCases(s)) : [];
+
+  const base: Omit<PlannedCombination, "skipped" | "branches" | "rowCount"> = {
+    combination,
+    notSupplied,
+    mayBeAbsent: sum.terms.filter((t) => canBeAbsent(t, ruleset, leadSymbols)).map((t) => termText(t, expression)),
+  };
+
+  // A "!" term is what the combination is about (the wind of 0.9D + 1.0W!): without it the row is not this combination.
+  for (const term of sum.terms) {
+    if (term.presence !== "must") continue;
+    const symbols = term.body.kind === "others" ? leadSymbols : symbolsOfBody(term.body, leadSymbols);
+    if (symbols.length > 0 && symbols.every((s) => !hasCases(s))) {
+      return ok({ ...base, skipped: `${symbols.join(", ")} not in the case table`, branches: [], rowCount: 0 });
+    }
+  }
+
+  // Shared choices: the leader, then every symbol written more than once with more than one way to act.
+  const occurrences = countOccurrences(sum);
+  const sharedSymbols = [...occurrences].filter(([s, n]) => n > 1 && statesOf(s).length > 1).map(([s]) => s);
+  const leaders: (string | null)[] = leadSymbols.length > 0 ? leadSymbols : [null];
+  let branchCount = leaders.length;
+  for (const s of sharedSymbols) branchCount *= statesOf(s).length;
+  if (branchCount > MAX_BRANCHES) {
+    return fail(
+      problem(
+        "too-many-rows",
+        `the choices its terms share (${[leadSymbols.length ? "the leading action" : "", ...sharedSymbols].filter(Boolean).join(", ")}) give ${branchCount} branches, more than ${MAX_BRANCHES}`,
+        { entry: combination.id },
+      ),
+    );
+  }
+
+  const branches: Branch[] = [];
+  for (const leader of leaders) {
+    for (const sharedStates of product(sharedSymbols.map((s) => statesOf(s)))) {
+      const ctx: Context = {
+        ruleset,
+        parameters,
+        expression,
+        statesOf,
+        shared: new Map(sharedSymbols.map((s, k) => [s, sharedStates[k]])),
+        leader,
+      };
+      const terms: PlannedTerm[] = [];
+      let leaderTerm: number | undefined;
+      for (const term of sum.terms) {
+        if (term.body.kind === "others") {
+          for (const s of leadSymbols) {
+            if (s === leader) continue;
+            const synthetic: Term = { ...term, body: { kind: "symbol", name: s, span: term.body.span } };
+            terms.push({ text: s, options: termOptions(synthetic, [], ctx, leadSymbols) });
+          }
+          continue;
+        }
+        if (term.body.kind === "lead") leaderTerm = terms.length;
+        terms.push({ text: term.body.kind === "lead" ? `${leader} (leading)` : termText(term, expression), options: termOptions(term, [], ctx, leadSymbols) });
+      }
+      const branch: Branch = { note: leader ? `${leader} leading` : "", terms };
+      if (leader && leaderTerm !== undefined) branch.leader = { symbol: leader, term: leaderTerm };
+      branches.push(branch);
+    }
+  }
+  const rowCount = branches.reduce((n, b) => n + b.terms.reduce((m, t) => m * t.options.length, 1), 0);
+  return ok({ ...base, skipped: null, branches, rowCount });
+}
+
+function termOptions(term: Term, stack: StackEntry[], ctx: Context, leadSymbols: string[]): TermOption[] {
+  const options: TermOption[] = [];
+  for (const choice of choiceAssignments(term.factor)) {
+    const inner = term.factor ? [...stack, { factor: term.factor, choice }] : stack;
+    for (const o of bodyOptions(term.body, inner, ctx, leadSymbols)) options.push(o);
+  }
+  const signed: TermOption[] = [];
+  for (const o of options) {
+    if (term.sign === "-") signed.push(negate(o, "-1 (subtracted)"));
+    else signed.push(o);
+    if (term.sign === "±") signed.push(negate(o, "-1 (other direction)"));
+  }
+  return finalize(signed, canBeAbsent(term, ctx.ruleset, leadSymbols));
+}
+
+function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols: string[]): TermOption[] {
+  switch (body.kind) {
+    case "symbol": {
+      const symbol = ctx.ruleset.symbolByName.get(body.name) as LoadSymbol;
+      const shared = ctx.shared.get(body.name);
+      const states = shared ? [shared] : ctx.statesOf(body.name);
+      const factors = stack.map((e) => evaluateFactor(e.factor, e.choice, symbol, { numbers: ctx.parameters.numbers }));
+      const factor = factors.reduce((a, b) => a * b, 1);
+      const why = stack.map((e) => factorText(e.factor, e.choice)).concat(attributeNotes(stack, symbol, ctx));
+      return states.map((state) => ({
+        absent: false,
+        contributions: state.parts.map((p) => ({
+          caseIndex: p.caseIndex,
+          factor: factor * p.sign,
+          why: [...why, p.why].filter((w) => w !== "").join(" × ") || "1",
+        })),
+      }));
+    }
+    case "lead":
+      return ctx.leader ? bodyOptions({ kind: "symbol", name: ctx.leader, span: body.span }, stack, ctx, leadSymbols) : [];
+    case "group": {
+      const out: TermOption[] = [];
+      for (const alternative of body.alternatives) for (const o of sumOptions(alternative, stack, ctx, leadSymbols)) out.push(o);
+      return out;
+    }
+    case "others":
+      // Expanded into one term per non-leading symbol by planOne; never reached inside brackets (rejected on load).
+      return [];
+  }
+}
+
+/** A bracketed sum: the product of its terms' options, added together. */
+function sumOptions(sum: Sum, stack: StackEntry[], ctx: Context, leadSymbols: string[]): TermOption[] {
+  let combined: TermOption[] = [{ absent: false, contributions: [] }];
+  for (const term of sum.terms) {
+    const options = termOptions(term, stack, ctx, leadSymbols);
+    const next: TermOption[] = [];
+    for (const a of combined) for (const b of options) next.push({ absent: false, contributions: [...a.contributions, ...b.contributions] });
+    combined = next;
+  }
+  return combined;
+}
+
+/** Psi values and the like, named with the symbol they were read for: "psi0 of W = 0.6". */
+function attributeNotes(stack: StackEntry[], symbol: LoadSymbol, ctx: Context): string[] {
+  const notes: string[] = [];
+  const visit = (a: Arith) => {
+    switch (a.kind) {
+      case "name": {
+        const attr = symbol.attributes.get(a.name);
+        if (attr !== undefined) {
+          const value = typeof attr === "number" ? attr : ctx.parameters.numbers.get(attr);
+          const note = `(${a.name} of ${symbol.name} = ${value}${typeof attr === "string" ? `, from ${attr}` : ""})`;
+          if (!notes.includes(note)) notes.push(note);
+        }
+        break;
+      }
+      case "negate":
+        visit(a.operand);
+        break;
+      case "binary":
+        visit(a.left);
+        visit(a.right);
+        break;
+      case "choice":
+        a.options.forEach(visit);
+        break;
+      case "number":
+        break;
+    }
+  };
+  for (const e of stack) visit(e.factor);
+  return notes.length > 0 ? [notes.join(" ")] : [];
+}
+
+function negate(o: TermOption, why: string): TermOption {
+  return { absent: o.absent, contributions: o.contributions.map((c) => ({ ...c, factor: -c.factor, why: c.why === "1" ? why : `${c.why} × ${why}` })) };
+}
+
+/**
+ * Merge factors on the same case, drop zero factors, put "left out" last where
+ * the term may be absent (an empty option is then the same thing), and keep the
+ * first of options that are identical.
+ */
+function finalize(options: TermOption[], absentAllowed: boolean): TermOption[] {
+  const merged = options.map((o) => ({ absent: o.absent, contributions: mergeContributions(o.contributions) }));
+  const kept = absentAllowed ? merged.filter((o) => o.contributions.length > 0) : merged;
+  if (absentAllowed) kept.push({ absent: true, contributions: [] });
+  const seen = new Set<string>();
+  return kept.filter((o) => {
+    const key = o.contributions.map((c) => `${c.caseIndex}:${c.factor}`).join(",");
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
+function mergeContributions(contributions: Contribution[]): Contribution[] {
+  const byCase = new Map<number, Contribution>();
+  for (const c of contributions) {
+    const before = byCase.get(c.caseIndex);
+    if (before) byCase.set(c.caseIndex, { caseIndex: c.caseIndex, factor: before.factor + c.factor, why: `${before.why} + ${c.why}` });
+    else byCase.set(c.caseIndex, c);
+  }
+  return [...byCase.values()].filter((c) => c.factor !== 0).sort((a, b) => a.caseIndex - b.caseIndex);
+}
+
+/** May this term be left out where that is worse? "?" yes, "!" no, otherwise only if every symbol in it may be. */
+export function canBeAbsent(term: Term, ruleset: Ruleset, leadSymbols: string[]): boolean {
+  if (term.presence === "may") return true;
+  if (term.presence === "must") return false;
+  const symbols = term.body.kind === "others" ? leadSymbols : symbolsOfBody(term.body, leadSymbols);
+  return symbols.every((s) => ruleset.symbolByName.get(s)?.canBeAbsent ?? false);
+}
+
+function symbolsOfBody(body: Body, leadSymbols: string[]): string[] {
+  switch (body.kind) {
+    case "symbol":
+      return [body.name];
+    case "lead":
+      return body.symbols.map((s) => s.name);
+    case "others":
+      return leadSymbols;
+    case "group":
+      return [...new Set(body.alternatives.flatMap((a) => symbolsOfSum(a, leadSymbols)))];
+  }
+}
+
+function symbolsOfSum(sum: Sum, leadSymbols: string[]): string[] {
+  return [...new Set(sum.terms.flatMap((t) => symbolsOfBody(t.body, leadSymbols)))];
+}
+
+/** How often each symbol is written; a lead(…) list counts once per symbol and "others" not at all. */
+function countOccurrences(sum: Sum, counts = new Map<string, number>()): Map<string, number> {
+  for (const term of sum.terms) {
+    const body = term.body;
+    if (body.kind === "symbol") counts.set(body.name, (counts.get(body.name) ?? 0) + 1);
+    else if (body.kind === "lead") for (const s of body.symbols) counts.set(s.name, (counts.get(s.name) ?? 0) + 1);
+    else if (body.kind === "group") for (const alt of body.alternatives) countOccurrences(alt, counts);
+  }
+  return counts;
+}
+
+/** The term as written, without its sign: "0.5(Lr or S or R)". */
+function termText(term: Term, expression: string): string {
+  const start = term.factor ? Math.min(term.factor.span.start, term.body.span.start) : term.body.span.start;
+  return expression.slice(start - 1, term.span.end - 1).trim();
+}
+
+function* product<T>(lists: T[][]): Generator<T[]> {
+  if (lists.length === 0) {
+    yield [];
+    return;
+  }
+  const [first, ...rest] = lists;
+  for (const x of first) for (const tail of product(rest)) yield [x, ...tail];
+}
