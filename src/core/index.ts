@@ -49,3 +49,6 @@ export { comboRows, type ComboRow } from "./evaluate/combos.js";
 export { explain, findRow, type Explanation, type ExplanationLine } from "./evaluate/explain.js";
 export { DEFAULT_ROW_LIMIT, enumerateRows, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
 export { planForTable } from "./planForTable.js";
+
+// Shipped rulesets
+export { shippedRulesets, findShippedRuleset, type ShippedRuleset } from "./library/shippedRulesets.js";
