@@ -125,10 +125,8 @@ class Parser {
       const signToken = this.next();
       terms.push(this.term(this.signOf(signToken), signToken.position));
     }
-    if (!topLevel && !(this.at("close") || this.atWord("or"))) {
-      if (this.at("end")) this.stop(this.t.position, 'a "(" is not closed');
-      this.expectEnd();
-    }
+    // Inside brackets the caller closes (and reports an unclosed bracket at its "(").
+    if (!topLevel && !(this.at("close") || this.atWord("or") || this.at("end"))) this.expectEnd();
     return { terms, span: { start, end: this.endOfPrevious() } };
   }
 
@@ -138,6 +136,7 @@ class Parser {
 
   /** term := [factor ["*"]] body [mark] */
   private term(sign: TermSign, start: number): Term {
+    if (this.at("end") || this.at("close")) this.stop(this.t.position, `expected a load symbol before ${this.describe(this.t)}`);
     let factor: Arith | null = null;
     if (!this.atBodyStart()) {
       factor = this.factor();
@@ -149,12 +148,8 @@ class Parser {
         if (factor && last.kind === "name") {
           this.stop(last.position, `"${last.text}" is not a load symbol of this ruleset, so nothing follows the factor (symbols: ${this.names.symbols().join(", ")})`);
         }
-        this.stop(
-          this.t.position,
-          factor
-            ? `the factor ending at character ${this.endOfPrevious() - 1} multiplies no load symbol`
-            : `expected a load symbol before ${this.describe(this.t)}`,
-        );
+        if (factor) this.stop(factor.span.start, `the factor "${this.sourceOf(factor.span)}" multiplies no load symbol`);
+        this.stop(this.t.position, `expected a load symbol before ${this.describe(this.t)}`);
       }
       this.stop(this.t.position, `expected a load symbol, found ${this.describe(this.t)}`);
     }
@@ -341,6 +336,13 @@ class Parser {
     }
     if (this.at("end")) this.stop(open.position, 'this "(" is not closed');
     this.stop(this.t.position, `expected ")" to close the "(" at character ${open.position}, found ${this.describe(this.t)}`);
+  }
+
+  private sourceOf(span: Span): string {
+    return this.tokens
+      .filter((t) => t.position >= span.start && t.position < span.end && t.kind !== "end")
+      .map((t) => t.text)
+      .join("");
   }
 
   private spanOf(token: Token): Span {

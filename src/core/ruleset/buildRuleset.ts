@@ -14,7 +14,11 @@ import type { RulesetFile } from "./schema.js";
 /** ASCE/SEI 7-16 §12.5.3: 100 % in one direction plus 30 % in the perpendicular one [confirmed for the 7-10 text]. */
 export const DEFAULT_ORTHOGONAL_SHARE = 0.3;
 
-export function buildRuleset(file: RulesetFile, origin: Ruleset["origin"] = "file"): Result<Ruleset> {
+/**
+ * `listedSymbols`: the symbols an "unknown name" message offers; by default the
+ * ruleset's own (a list typed in cells offers the whole catalogue instead).
+ */
+export function buildRuleset(file: RulesetFile, origin: Ruleset["origin"] = "file", listedSymbols?: readonly string[]): Result<Ruleset> {
   const problems: Problem[] = [];
   const owner = new Map<string, string>(); // name → what already uses it, for clash messages
 
@@ -138,7 +142,7 @@ export function buildRuleset(file: RulesetFile, origin: Ruleset["origin"] = "fil
 
   const names: NameClassifier = {
     kind: (n) => (symbolByName.has(n) ? "symbol" : values.has(n) ? "value" : "unknown"),
-    symbols: () => symbols.map((s) => s.name),
+    symbols: () => listedSymbols ?? symbols.map((s) => s.name),
     values: () => [...values.keys()],
   };
 

@@ -71,7 +71,7 @@ export function rulesetFromRows(rows: Cell[][]): Result<Ruleset> {
     provenance: [{ source: "typed in the workbook by its user", status: "confirmed", covers: "all combinations" }],
     approval: { approvedBy: null, date: null, fingerprint: null },
   };
-  const built = buildRuleset(file, "cells");
+  const built = buildRuleset(file, "cells", catalogue);
   if (!built.ok) {
     // Point each problem back at its sheet row instead of a JSON path.
     return fail(
