@@ -48,7 +48,7 @@ export function readCaseTable(matrix: Cell[][], ruleset: Ruleset, options: CaseT
   }
   const raggedAt = rows.findIndex((r) => r.length !== width);
   if (raggedAt >= 0) {
-    return fail(problem("cases-ragged", `row ${raggedAt + 1} has ${rows[raggedAt].length} cells where the header row has ${width}`, { row: raggedAt }));
+    return fail(problem("cases-ragged", `it has ${rows[raggedAt].length} cells where the header row has ${width}`, { row: raggedAt }));
   }
   let orientation = options.orientation ?? "auto";
   if (orientation === "auto") {
