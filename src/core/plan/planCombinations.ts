@@ -165,7 +165,12 @@ function planOne(
   return ok({ ...base, skipped: null, branches, rowCount });
 }
 
-function termOptions(term: Term, stack: StackEntry[], ctx: Context, leadSymbols: string[]): TermOption[] {
+/**
+ * A term's options. `nested`: the term stands inside an alternative, where it
+ * acts whenever its alternative does unless marked "?" — absence by default is
+ * decided for the whole top-level term, so "(Lr or S or R)!" never goes empty.
+ */
+function termOptions(term: Term, stack: StackEntry[], ctx: Context, leadSymbols: string[], nested = false): TermOption[] {
   const options: TermOption[] = [];
   for (const choice of choiceAssignments(term.factor)) {
     const inner = term.factor ? [...stack, { factor: term.factor, choice }] : stack;
@@ -177,7 +182,7 @@ function termOptions(term: Term, stack: StackEntry[], ctx: Context, leadSymbols:
     else signed.push(o);
     if (term.sign === "±") signed.push(negate(o, "-1 (other direction)"));
   }
-  return finalize(signed, canBeAbsent(term, ctx.ruleset, leadSymbols));
+  return finalize(signed, nested ? term.presence === "may" : canBeAbsent(term, ctx.ruleset, leadSymbols));
 }
 
 function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols: string[]): TermOption[] {
@@ -215,7 +220,7 @@ function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols:
 function sumOptions(sum: Sum, stack: StackEntry[], ctx: Context, leadSymbols: string[]): TermOption[] {
   let combined: TermOption[] = [{ absent: false, contributions: [] }];
   for (const term of sum.terms) {
-    const options = termOptions(term, stack, ctx, leadSymbols);
+    const options = termOptions(term, stack, ctx, leadSymbols, true);
     const next: TermOption[] = [];
     for (const a of combined) for (const b of options) next.push({ absent: false, contributions: [...a.contributions, ...b.contributions] });
     combined = next;

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { describeProblem, loadRuleset, parameterPairs, parseParameterText, resolveParameters, RULESET_FORMAT, type RulesetFile } from "../../../src/core/index.js";
+import { describeProblem, loadRuleset, parameterPairs, parseParameterText, resolveParameters, RULESET_FORMAT, type Result, type RulesetFile } from "../../../src/core/index.js";
 
 /** Parameters as ASCE/SEI 7-16 and EN 1990 use them; values from shared/REFERENCES.md. */
 const file: RulesetFile = {
@@ -31,8 +31,9 @@ const loaded = loadRuleset(file);
 if (!loaded.ok) throw new Error(JSON.stringify(loaded.problems));
 const ruleset = loaded.value;
 
-const messages = (r: { ok: boolean; problems?: { message: string; place: object }[] }) =>
-  r.ok ? [] : (r as { problems: Parameters<typeof describeProblem>[0][] }).problems.map((p) => describeProblem(p));
+function messages<T>(r: Result<T>): string[] {
+  return r.ok ? [] : r.problems.map((p) => describeProblem(p));
+}
 
 describe("parseParameterText", () => {
   test("reads name=value pairs separated by semicolons or new lines", () => {

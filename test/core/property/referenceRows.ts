@@ -13,8 +13,9 @@
  *   at the share, every sign pattern;
  * - "(a or b)" takes one alternative; a factor "(x or y)" one option;
  * - "-" negates, "±" takes both signs;
- * - a term may be absent: "?" yes, "!" no, otherwise iff every symbol in it
- *   may be (transient by default);
+ * - a top-level term may be absent: "?" yes, "!" no, otherwise iff every
+ *   symbol in it may be (transient by default); a term inside an alternative
+ *   only if marked "?";
  * - lead(…) takes each listed symbol in turn; "others" stands for one term per
  *   non-leading listed symbol;
  * - a combination with a "!" term whose symbols have no cases gives no rows.
@@ -54,17 +55,17 @@ export function referenceRows(ruleset: Ruleset, numbers: ReadonlyMap<string, num
             for (const s of leadSymbols) if (s !== leader) terms.push({ ...t, body: { kind: "symbol", name: s, span: t.body.span } });
           } else terms.push(t);
         }
-        for (const row of sumVectors(terms, [], ctx)) rows.push(row);
+        for (const row of sumVectors(terms, [], ctx, false)) rows.push(row);
       }
     }
   }
   return rows;
 }
 
-function sumVectors(terms: Term[], factors: { a: Arith; choice: Map<Arith, number> }[], ctx: Ctx): Vector[] {
+function sumVectors(terms: Term[], factors: { a: Arith; choice: Map<Arith, number> }[], ctx: Ctx, nested: boolean): Vector[] {
   let out: Vector[] = [new Map()];
   for (const term of terms) {
-    const options = termVectors(term, factors, ctx);
+    const options = termVectors(term, factors, ctx, nested);
     const next: Vector[] = [];
     for (const a of out) for (const b of options) next.push(add(a, b));
     out = next;
@@ -72,7 +73,7 @@ function sumVectors(terms: Term[], factors: { a: Arith; choice: Map<Arith, numbe
   return out;
 }
 
-function termVectors(term: Term, factors: { a: Arith; choice: Map<Arith, number> }[], ctx: Ctx): Vector[] {
+function termVectors(term: Term, factors: { a: Arith; choice: Map<Arith, number> }[], ctx: Ctx, nested: boolean): Vector[] {
   const out: Vector[] = [];
   for (const choice of choicesOf(term.factor)) {
     const inner = term.factor ? [...factors, { a: term.factor, choice }] : factors;
@@ -83,7 +84,7 @@ function termVectors(term: Term, factors: { a: Arith; choice: Map<Arith, number>
     }
   }
   const symbols = symbolsIn(term.body, ctx.leadSymbols);
-  const mayBeAbsent = term.presence === "may" || (term.presence === null && symbols.every((s) => ctx.ruleset.symbolByName.get(s)?.canBeAbsent));
+  const mayBeAbsent = term.presence === "may" || (!nested && term.presence === null && symbols.every((s) => ctx.ruleset.symbolByName.get(s)?.canBeAbsent));
   if (mayBeAbsent) out.push(new Map());
   return out;
 }
@@ -99,7 +100,7 @@ function bodyVectors(body: Body, factors: { a: Arith; choice: Map<Arith, number>
     case "lead":
       return bodyVectors({ kind: "symbol", name: ctx.leader as string, span: body.span }, factors, ctx);
     case "group":
-      return body.alternatives.flatMap((alt) => sumVectors(alt.terms, factors, ctx));
+      return body.alternatives.flatMap((alt) => sumVectors(alt.terms, factors, ctx, true));
     case "others":
       throw new Error("others inside brackets");
   }
