@@ -118,7 +118,9 @@ function planOne(
   // Shared choices: the leader, then every symbol written more than once with more than one way to act.
   const occurrences = countOccurrences(sum);
   const sharedSymbols = [...occurrences].filter(([s, n]) => n > 1 && statesOf(s).length > 1).map(([s]) => s);
-  const leaders: (string | null)[] = leadSymbols.length > 0 ? leadSymbols : [null];
+  // An action with no case in the table cannot lead; with none of them supplied, nothing leads.
+  const suppliedLeaders = leadSymbols.filter((s) => !supplied || hasCases(s));
+  const leaders: (string | null)[] = suppliedLeaders.length > 0 ? suppliedLeaders : [null];
   let branchCount = leaders.length;
   for (const s of sharedSymbols) branchCount *= statesOf(s).length;
   if (branchCount > MAX_BRANCHES) {
@@ -142,8 +144,7 @@ function planOne(
         shared: new Map(sharedSymbols.map((s, k) => [s, sharedStates[k]])),
         leader,
       };
-      const terms: PlannedTerm[] = [];
-      let leaderTerm: number | undefined;
+      const terms: (PlannedTerm & { leads?: boolean })[] = [];
       for (const term of sum.terms) {
         if (term.body.kind === "others") {
           for (const s of leadSymbols) {
@@ -153,11 +154,15 @@ function planOne(
           }
           continue;
         }
-        if (term.body.kind === "lead") leaderTerm = terms.length;
-        terms.push({ text: term.body.kind === "lead" ? `${leader} (leading)` : termText(term, expression), options: termOptions(term, [], ctx, leadSymbols) });
+        const leads = term.body.kind === "lead";
+        terms.push({ text: leads ? `${leader} (leading)` : termText(term, expression), options: termOptions(term, [], ctx, leadSymbols), leads });
       }
-      const branch: Branch = { note: leader ? `${leader} leading` : "", terms };
-      if (leader && leaderTerm !== undefined) branch.leader = { symbol: leader, term: leaderTerm };
+      // A term that loads no case in any option (its symbols are not in the table) adds nothing;
+      // the combination's notSupplied list says so once, instead of every label saying "absent".
+      const kept = terms.filter((t) => t.options.some((o) => o.contributions.length > 0));
+      const branch: Branch = { note: leader ? `${leader} leading` : "", terms: kept.map(({ text, options }) => ({ text, options })) };
+      const leaderTerm = kept.findIndex((t) => t.leads);
+      if (leader && leaderTerm >= 0) branch.leader = { symbol: leader, term: leaderTerm };
       branches.push(branch);
     }
   }
@@ -199,12 +204,12 @@ function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols:
         contributions: state.parts.map((p) => ({
           caseIndex: p.caseIndex,
           factor: factor * p.sign,
-          why: [...why, p.why].filter((w) => w !== "").join(" × ") || "1",
+          why: productText([...why, p.why]),
         })),
       }));
     }
     case "lead":
-      return ctx.leader ? bodyOptions({ kind: "symbol", name: ctx.leader, span: body.span }, stack, ctx, leadSymbols) : [];
+      return ctx.leader ? bodyOptions({ kind: "symbol", name: ctx.leader, span: body.span }, stack, ctx, leadSymbols) : [{ absent: false, contributions: [] }];
     case "group": {
       const out: TermOption[] = [];
       for (const alternative of body.alternatives) for (const o of sumOptions(alternative, stack, ctx, leadSymbols)) out.push(o);
@@ -258,6 +263,14 @@ function attributeNotes(stack: StackEntry[], symbol: LoadSymbol, ctx: Context): 
   };
   for (const e of stack) visit(e.factor);
   return notes.length > 0 ? [notes.join(" ")] : [];
+}
+
+/** Factors written as one product, bracketing any sum among several: "(1.2 + 0.2 × SDS) × 0.5". */
+function productText(pieces: string[]): string {
+  const present = pieces.filter((p) => p !== "");
+  if (present.length === 0) return "1";
+  if (present.length === 1) return present[0];
+  return present.map((p) => (/ [+-] /.test(p) && !/^\(.*\)$/.test(p) ? `(${p})` : p)).join(" × ");
 }
 
 function negate(o: TermOption, why: string): TermOption {

@@ -16,8 +16,8 @@
  * - a top-level term may be absent: "?" yes, "!" no, otherwise iff every
  *   symbol in it may be (transient by default); a term inside an alternative
  *   only if marked "?";
- * - lead(…) takes each listed symbol in turn; "others" stands for one term per
- *   non-leading listed symbol;
+ * - lead(…) takes each listed symbol that has cases in turn (none: it adds
+ *   nothing); "others" stands for one term per non-leading listed symbol;
  * - a combination with a "!" term whose symbols have no cases gives no rows.
  */
 import type { Arith, Body, Sum, Term } from "../../../src/core/expression/ast.js";
@@ -46,7 +46,8 @@ export function referenceRows(ruleset: Ruleset, numbers: ReadonlyMap<string, num
     if (sum.terms.some((t) => t.presence === "must" && symbolsIn(t.body, leadSymbols).every((s) => (casesOf.get(s) ?? []).length === 0))) continue;
     const used = [...new Set(sum.terms.flatMap((t) => symbolsIn(t.body, leadSymbols)))];
     const stateLists = used.map((s) => statesOf(ruleset.symbolByName.get(s) as LoadSymbol, casesOf.get(s) ?? [], modes.get(s), numbers));
-    for (const leader of leadSymbols.length > 0 ? leadSymbols : [null]) {
+    const suppliedLeaders = leadSymbols.filter((s) => (casesOf.get(s) ?? []).length > 0);
+    for (const leader of suppliedLeaders.length > 0 ? suppliedLeaders : [null]) {
       for (const assignment of cartesian(stateLists)) {
         const ctx: Ctx = { ruleset, numbers, casesOf, state: new Map(used.map((s, k) => [s, assignment[k]])), leader, leadSymbols };
         const terms: Term[] = [];
@@ -98,7 +99,7 @@ function bodyVectors(body: Body, factors: { a: Arith; choice: Map<Arith, number>
       return [scale(ctx.state.get(body.name) ?? new Map(), f)];
     }
     case "lead":
-      return bodyVectors({ kind: "symbol", name: ctx.leader as string, span: body.span }, factors, ctx);
+      return ctx.leader === null ? [new Map()] : bodyVectors({ kind: "symbol", name: ctx.leader, span: body.span }, factors, ctx);
     case "group":
       return body.alternatives.flatMap((alt) => sumVectors(alt.terms, factors, ctx, true));
     case "others":
