@@ -65,7 +65,19 @@ export function rowFactorText(plan: Plan, ref: RowRef): string {
     .join("");
 }
 
+/** Labels per plan, by row: a long export names the same few governing rows again and again. */
+const labelCache = new WeakMap<Plan, Map<string, string>>();
+
 export function rowLabel(plan: Plan, ref: RowRef): string {
+  let cache = labelCache.get(plan);
+  if (!cache) labelCache.set(plan, (cache = new Map()));
+  const key = `${ref.combination}/${ref.branch}/${ref.choices.join(",")}`;
+  let label = cache.get(key);
+  if (label === undefined) cache.set(key, (label = composeLabel(plan, ref)));
+  return label;
+}
+
+function composeLabel(plan: Plan, ref: RowRef): string {
   const planned = plan.combinations[ref.combination];
   const branch = planned.branches[ref.branch];
   const absent = branch.terms.filter((term, t) => term.options[ref.choices[t]].absent).map((t) => t.text);
