@@ -25,6 +25,8 @@ export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";
 export { rulesetStatus, VERIFICATION_TEXT, type RulesetStatus, type Verification, type Approval } from "./ruleset/status.js";
 export { RULESET_FORMAT, rulesetSchema, type RulesetFile } from "./ruleset/schema.js";
 export type { Ruleset, LoadSymbol, Parameter, Combination, CaseMode } from "./ruleset/model.js";
+export { compareRulesets, type RulesetComparison, type EntryDifference, type CombinationDifference, type FieldDifference } from "./ruleset/compareRulesets.js";
+export { approveRuleset, withoutApproval } from "./ruleset/approveRuleset.js";
 
 // Parameters
 export { parseParameterText, parameterPairs, type ParameterInput } from "./params/parameterInput.js";
