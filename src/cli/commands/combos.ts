@@ -1,0 +1,73 @@
+/**
+ * `loadwright combos`: the concrete combination rows a checker reads, each
+ * with its clause and the factor on every load symbol (or, with --cases, on
+ * every case of that table).
+ */
+import { comboRows, describeProblem } from "../../core/index.js";
+import { CliError } from "../cliError.js";
+import { caseMapFrom } from "../input/caseMapOption.js";
+import { openCases, tableShape } from "../input/caseInput.js";
+import { parameterInput } from "../input/paramOption.js";
+import { chooseRuleset } from "../input/rulesetOption.js";
+import { jsonNumber, numberText } from "../output/cells.js";
+import { chooseFormat } from "../output/format.js";
+import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
+import { rowWriter } from "../output/rowWriter.js";
+import { delimiterOf, idColumnsOf, layoutOf, planOrFail, writePreamble, type Io, type RulesetOptions } from "./common.js";
+
+export interface CombosOptions extends RulesetOptions {
+  cases?: string;
+  layout: string;
+  idColumns: string;
+  delimiter: string;
+  map?: string;
+}
+
+export async function combosCommand(options: CombosOptions, io: Io): Promise<void> {
+  const format = chooseFormat(options.format, io.stdoutIsTerminal);
+  const chosen = chooseRuleset(options.ruleset);
+  const parameters = parameterInput(options.param);
+  let shape = null;
+  if (options.cases !== undefined) {
+    const delimiter = delimiterOf(options.delimiter);
+    const map = await caseMapFrom(options.map, chosen.ruleset, delimiter);
+    const input = await openCases(options.cases, chosen.ruleset, { layout: layoutOf(options.layout), idColumns: idColumnsOf(options.idColumns), delimiter, map });
+    shape = tableShape(input);
+    if (input.kind === "stream") await input.rows.return(undefined);
+  }
+  const plan = planOrFail(chosen, parameters, shape);
+  const listed = comboRows(plan);
+  if (!listed.ok) throw new CliError(`ruleset ${chosen.ruleset.file.id}: ${listed.problems.map((p) => describeProblem(p)).join("; ")}`);
+  const names = plan.cases.map((c) => c.header);
+  await writePreamble(io, { chosen, plan, format });
+
+  if (format === "json") {
+    const body = {
+      ruleset: rulesetJson(chosen),
+      parameters: parametersJson(plan),
+      cautions: CAUTIONS,
+      factorsOn: names,
+      skipped: plan.combinations.filter((c) => c.skipped !== null).map((c) => ({ combination: c.combination.id, reason: c.skipped })),
+      rows: listed.value.map((r) => ({
+        label: r.label,
+        combination: r.combination,
+        clause: r.clause,
+        factors: Object.fromEntries(names.map((n, k) => [n, jsonNumber(r.factors[k])])),
+      })),
+    };
+    io.out.line(JSON.stringify(body, null, 2));
+    await io.out.flush();
+    return;
+  }
+  const writer = rowWriter(format, io.out, [
+    { title: "label" },
+    { title: "combination" },
+    { title: "clause" },
+    ...names.map((n) => ({ title: n, align: "right" as const })),
+  ]);
+  for (const r of listed.value) {
+    const factors = r.factors.map((f) => (f === 0 && format !== "csv" ? "" : numberText(f)));
+    await writer.row([r.label, r.combination, r.clause, ...factors]);
+  }
+  await writer.end();
+}

@@ -1,0 +1,79 @@
+/**
+ * `loadwright explain FILE --row LABEL --component NAME`: one value's
+ * derivation as a checker writes it out — combination and clause, the factor
+ * on every case and where it comes from, the products and their sum. In a
+ * streamed file only the named result row is kept.
+ */
+import { describeProblem, explain, type CaseTable } from "../../core/index.js";
+import { distance } from "fastest-levenshtein";
+import { cliErrorOf, CliError } from "../cliError.js";
+import { jsonNumber, numberText } from "../output/cells.js";
+import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
+import { rowWriter } from "../output/rowWriter.js";
+import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
+
+export interface ExplainOptions extends CaseOptions {
+  row: string;
+  component: string;
+}
+
+export async function explainCommand(file: string, options: ExplainOptions, io: Io): Promise<void> {
+  const prepared = await prepare(file, options, io);
+  const { plan, format, chosen, input } = prepared;
+  if (plan.rowCount === 0) throw noRowsError(plan, file);
+  const wanted = options.component.trim();
+  let table: CaseTable;
+  if (input.kind === "table") {
+    table = input.table;
+  } else {
+    let values: Float64Array | null = null;
+    let guess: { id: string; d: number } | null = null;
+    for await (const row of input.rows) {
+      if (row.id === wanted) {
+        values = row.values;
+        break; // leaving the loop closes the file
+      }
+      const d = distance(wanted.toLowerCase(), row.id.toLowerCase());
+      if (d <= 2 && (!guess || d < guess.d)) guess = { id: row.id, d };
+    }
+    if (!values) throw new CliError(`--component: no result row of ${file} is named "${wanted}"${guess ? `; did you mean "${guess.id}"?` : ""}`);
+    table = { orientation: "columns", cases: input.cases, components: [wanted], values: [values], map: input.map };
+  }
+  const row = /^\d+$/.test(options.row.trim()) ? Number(options.row.trim()) : options.row;
+  const result = explain(plan, table, row, wanted);
+  if (!result.ok) throw cliErrorOf(result.problems.map((p) => `${p.kind === "unknown-component" ? "--component" : "--row"}: ${describeProblem(p)}`));
+  const x = result.value;
+  finiteOrFail(x.total, file, `(${x.component})`);
+  await writePreamble(io, prepared);
+
+  if (format === "json") {
+    const body = {
+      ruleset: rulesetJson(chosen),
+      parameters: parametersJson(plan),
+      cautions: CAUTIONS,
+      explanation: {
+        label: x.label,
+        combination: x.combination,
+        clause: x.clause,
+        expression: x.expression,
+        component: x.component,
+        lines: x.lines.map((l) => ({ case: l.case, factor: jsonNumber(l.factor), why: l.why, caseValue: jsonNumber(l.caseValue), product: jsonNumber(l.product) })),
+        total: jsonNumber(x.total),
+        parameters: x.parameters.map((p) => ({ name: p.name, value: typeof p.value === "number" ? jsonNumber(p.value) : p.value, given: p.given })),
+        text: x.text,
+      },
+    };
+    io.out.line(JSON.stringify(body, null, 2));
+    await io.out.flush();
+    return;
+  }
+  if (format === "csv") {
+    const writer = rowWriter("csv", io.out, [{ title: "case" }, { title: "factor" }, { title: "why" }, { title: "case value" }, { title: "product" }]);
+    for (const l of x.lines) await writer.row([l.case, numberText(l.factor), l.why, numberText(l.caseValue), numberText(l.product)]);
+    await writer.row(["total", "", x.label, "", numberText(x.total)]);
+    await writer.end();
+    return;
+  }
+  for (const line of x.text) io.out.line(format === "md" ? `    ${line}` : line);
+  await io.out.flush();
+}

@@ -1,0 +1,54 @@
+/** `loadwright factored FILE`: every concrete row with the value of every component (within the row limit). */
+import { describeProblem, factored, type CaseTable } from "../../core/index.js";
+import { CliError } from "../cliError.js";
+import type { CaseInput } from "../input/caseInput.js";
+import { jsonNumber, numberText } from "../output/cells.js";
+import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
+import { rowWriter } from "../output/rowWriter.js";
+import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
+
+export async function factoredCommand(file: string, options: CaseOptions, io: Io): Promise<void> {
+  const prepared = await prepare(file, options, io);
+  const { plan, format, chosen } = prepared;
+  if (plan.rowCount === 0) throw noRowsError(plan, file);
+  const table = await wholeTable(prepared.input);
+  const rows = factored(plan, table);
+  if (!rows.ok) throw new CliError(`${file}: ${rows.problems.map((p) => describeProblem(p)).join("; ")}`);
+  for (const r of rows.value) r.values.forEach((v, c) => finiteOrFail(v, file, `(${table.components[c]}, row ${r.label})`));
+  await writePreamble(io, prepared);
+
+  if (format === "json") {
+    const body = {
+      ruleset: rulesetJson(chosen),
+      parameters: parametersJson(plan),
+      cautions: CAUTIONS,
+      components: table.components,
+      rows: rows.value.map((r) => ({ label: r.label, combination: r.combination, values: r.values.map(jsonNumber) })),
+    };
+    io.out.line(JSON.stringify(body));
+    await io.out.flush();
+    return;
+  }
+  const writer = rowWriter(format, io.out, [
+    { title: "label" },
+    { title: "combination" },
+    ...table.components.map((c) => ({ title: c, align: "right" as const })),
+  ]);
+  for (const r of rows.value) {
+    await writer.row([r.label, r.combination, ...r.values.map(numberText)]);
+    if (io.out.isClosed) return;
+  }
+  await writer.end();
+}
+
+/** A streamed file gathered into one table: listing every row needs every result at once. */
+export async function wholeTable(input: CaseInput): Promise<CaseTable> {
+  if (input.kind === "table") return input.table;
+  const components: string[] = [];
+  const values: Float64Array[] = [];
+  for await (const row of input.rows) {
+    components.push(row.id);
+    values.push(row.values);
+  }
+  return { orientation: "columns", cases: input.cases, components, values, map: input.map };
+}

@@ -1,0 +1,58 @@
+/**
+ * A CSV file as records, each with the line it starts on, read as a stream so
+ * that a million-line export never sits in memory. Fields stay text: the core
+ * reads numbers written as text for CSV (numbersAsText).
+ */
+import { createReadStream } from "node:fs";
+import { parse } from "csv-parse";
+import { CliError } from "../cliError.js";
+import { fileErrorText } from "./fileAccess.js";
+
+export interface CsvRecord {
+  cells: string[];
+  /** 1-based line the record starts on. */
+  line: number;
+}
+
+export interface CsvOptions {
+  delimiter?: string;
+}
+
+export interface CsvReader {
+  records: AsyncGenerator<CsvRecord>;
+  /** Bytes of the file read so far (for the progress bar). */
+  bytesRead(): number;
+}
+
+export function readCsv(path: string, options: CsvOptions = {}): CsvReader {
+  const file = createReadStream(path);
+  const parser = parse({ bom: true, relax_column_count: true, skip_empty_lines: false, info: true, delimiter: options.delimiter ?? "," });
+  let fileError: unknown = null;
+  file.on("error", (e) => {
+    fileError = e;
+    parser.destroy();
+  });
+  file.pipe(parser);
+
+  async function* records(): AsyncGenerator<CsvRecord> {
+    let nextLine = 1;
+    try {
+      for await (const item of parser as AsyncIterable<{ record: string[]; info: { lines: number } }>) {
+        yield { cells: item.record, line: nextLine };
+        nextLine = item.info.lines + 1;
+      }
+    } catch (e) {
+      if (fileError) throw new CliError(`${path}: ${fileErrorText(fileError)}`);
+      const lines = (e as { lines?: unknown }).lines;
+      const at = typeof lines === "number" ? ` line ${lines}` : "";
+      const message = e instanceof Error ? e.message.replace(/\s*(at|on) line \d+\.?$/, "") : String(e);
+      throw new CliError(`${path}${at}: not readable as CSV: ${message}`);
+    } finally {
+      file.destroy();
+      parser.destroy();
+    }
+    if (fileError) throw new CliError(`${path}: ${fileErrorText(fileError)}`);
+  }
+
+  return { records: records(), bytesRead: () => file.bytesRead };
+}
