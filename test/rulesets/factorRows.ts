@@ -21,11 +21,11 @@ export function shipped(id: string): Ruleset {
   return found.ruleset;
 }
 
-/** A plan with one case per listed symbol, each case named by its symbol. */
-export function planWith(ruleset: Ruleset, parameters: ParameterInput, symbols: string[]): Plan {
+/** A plan for these case headers ("D", "W:N"): the symbol is what stands before any ":". */
+export function planWith(ruleset: Ruleset, parameters: ParameterInput, headers: string[]): Plan {
   const resolved = resolveParameters(ruleset, parameters);
   if (!resolved.ok) throw new Error(resolved.problems.map((p) => describeProblem(p)).join("; "));
-  const plan = planCombinations(ruleset, resolved.value, { cases: symbols.map((s) => ({ header: s, symbol: s })) });
+  const plan = planCombinations(ruleset, resolved.value, { cases: headers.map((h) => ({ header: h, symbol: h.split(":")[0] })) });
   if (!plan.ok) throw new Error(plan.problems.map((p) => describeProblem(p)).join("; "));
   return plan.value;
 }
@@ -37,6 +37,21 @@ export interface FactorRow {
 }
 
 export const row = (id: string, factors: Record<string, number>): FactorRow => ({ id, factors });
+
+/** Every concrete row, terms left out and loads reversed included. */
+export function allRows(plan: Plan): FactorRow[] {
+  const listed = comboRows(plan);
+  if (!listed.ok) throw new Error(listed.problems.map((p) => describeProblem(p)).join("; "));
+  return listed.value.map((r) => ({ id: r.combination, factors: factorsByHeader(plan, r.factors) }));
+}
+
+function factorsByHeader(plan: Plan, factors: number[]): Record<string, number> {
+  const out: Record<string, number> = {};
+  factors.forEach((f, i) => {
+    if (f !== 0) out[plan.cases[i].header] = f;
+  });
+  return out;
+}
 
 /**
  * The rows in which every term that can act does act, and every reversible load
@@ -56,11 +71,7 @@ export function printedRows(plan: Plan): FactorRow[] {
     if (!everyTermActs) continue;
     const positive = r.factors.every((f, i) => !reversible.has(plan.cases[i].symbol) || f >= 0);
     if (!positive) continue;
-    const factors: Record<string, number> = {};
-    r.factors.forEach((f, i) => {
-      if (f !== 0) factors[plan.cases[i].header] = f;
-    });
-    out.push({ id: r.combination, factors });
+    out.push({ id: r.combination, factors: factorsByHeader(plan, r.factors) });
   }
   return out;
 }
