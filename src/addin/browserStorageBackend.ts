@@ -1,0 +1,14 @@
+/** The browser's local storage: for trying the task pane outside Excel. Nothing travels with a workbook. */
+import type { SettingsBackend } from "./settingsBackend.js";
+
+export function browserStorageBackend(storage: Storage): SettingsBackend {
+  return {
+    where: "this browser's local storage (demo: not saved in any workbook)",
+    available: () => true,
+    read: (key) => storage.getItem(key),
+    write: async (key, value) => {
+      // setItem throws (quota, private mode) before changing anything: the old value stays.
+      storage.setItem(key, value);
+    },
+  };
+}

@@ -1,0 +1,109 @@
+/**
+ * Rulesets a firm keeps with a workbook (or, outside Excel, in the browser):
+ * one JSON value holding every stored ruleset file exactly as validated. A save
+ * checks the new file first and writes only if it loads; a stored value that
+ * cannot be read is never overwritten, so nothing stored is lost to a failed
+ * import or a bad edit.
+ */
+import { describeProblem, loadRuleset, type Problem, type Result, type Ruleset, type RulesetFile } from "../core/index.js";
+import type { SettingsBackend } from "./settingsBackend.js";
+
+export const STORE_KEY = "loadwright.rulesets";
+export const STORE_FORMAT = "loadwright-store/1";
+
+export interface StoredRuleset {
+  id: string;
+  /** The file as stored; `loaded` says whether it still validates (the format may have moved on). */
+  file: unknown;
+  loaded: Result<Ruleset>;
+}
+
+interface StoreValue {
+  format: typeof STORE_FORMAT;
+  rulesets: unknown[];
+}
+
+const storeProblem = (message: string): Problem => ({ kind: "ruleset-json", message, place: {} });
+
+export class RulesetStore {
+  private cache: { text: string; entries: Result<StoredRuleset[]> } | null = null;
+
+  constructor(readonly backend: SettingsBackend) {}
+
+  /** Every stored ruleset, or a problem if the stored value cannot be read at all. */
+  entries(): Result<StoredRuleset[]> {
+    if (!this.backend.available()) return { ok: true, value: [] };
+    const text = this.backend.read(STORE_KEY);
+    if (text === null) return { ok: true, value: [] };
+    if (this.cache?.text === text) return this.cache.entries;
+    const entries = parseStore(text, this.backend.where);
+    this.cache = { text, entries };
+    return entries;
+  }
+
+  find(id: string): StoredRuleset | undefined {
+    const all = this.entries();
+    return all.ok ? all.value.find((e) => e.id === id) : undefined;
+  }
+
+  /** Validates, then adds or replaces the ruleset with the same id. Nothing is written unless it loads. */
+  async save(input: string | RulesetFile | unknown): Promise<Result<Ruleset>> {
+    const loaded = loadRuleset(input);
+    if (!loaded.ok) return loaded;
+    const current = this.entries();
+    if (!current.ok) return current;
+    const file = loaded.value.file;
+    const kept = current.value.filter((e) => e.id !== file.id).map((e) => e.file);
+    const written = await this.write([...kept, file]);
+    return written.ok ? loaded : written;
+  }
+
+  async remove(id: string): Promise<Result<true>> {
+    const current = this.entries();
+    if (!current.ok) return current;
+    if (!current.value.some((e) => e.id === id)) {
+      return { ok: false, problems: [storeProblem(`no ruleset "${id}" is stored in ${this.backend.where}`)] };
+    }
+    const written = await this.write(current.value.filter((e) => e.id !== id).map((e) => e.file));
+    return written.ok ? { ok: true, value: true } : written;
+  }
+
+  private async write(rulesets: unknown[]): Promise<Result<true>> {
+    const value: StoreValue = { format: STORE_FORMAT, rulesets };
+    try {
+      await this.backend.write(STORE_KEY, JSON.stringify(value));
+      return { ok: true, value: true };
+    } catch (e) {
+      const reason = e instanceof Error ? e.message : String(e);
+      return { ok: false, problems: [storeProblem(`the ruleset was not saved to ${this.backend.where}: ${reason}; what was stored before is unchanged`)] };
+    }
+  }
+}
+
+function parseStore(text: string, where: string): Result<StoredRuleset[]> {
+  let data: unknown;
+  try {
+    data = JSON.parse(text);
+  } catch {
+    return { ok: false, problems: [storeProblem(`the rulesets stored in ${where} are not readable JSON; they are left untouched`)] };
+  }
+  const value = data as Partial<StoreValue> | null;
+  if (!value || value.format !== STORE_FORMAT || !Array.isArray(value.rulesets)) {
+    return {
+      ok: false,
+      problems: [storeProblem(`the rulesets stored in ${where} are not in the ${STORE_FORMAT} format; they are left untouched`)],
+    };
+  }
+  return {
+    ok: true,
+    value: value.rulesets.map((file, index) => {
+      const id = typeof (file as { id?: unknown })?.id === "string" ? (file as { id: string }).id : `(entry ${index + 1} without an id)`;
+      return { id, file, loaded: loadRuleset(file) };
+    }),
+  };
+}
+
+/** One line per problem of a stored entry, for the pane and for formula messages. */
+export function storedProblemText(entry: StoredRuleset): string {
+  return entry.loaded.ok ? "" : entry.loaded.problems.map((p) => describeProblem(p)).join("; ");
+}

@@ -1,0 +1,39 @@
+/**
+ * LW.ENVELOPE: per component (or per result row of a cases-as-columns table) the
+ * largest and smallest value over every concrete row, each with the label of
+ * the row that gives it. Exact without listing the rows, so it has no row limit.
+ */
+import { envelope } from "../../core/index.js";
+import { given, type Formula } from "../formula.js";
+import { outputTable, planNotes } from "../outputTable.js";
+import { payloadProblem } from "../payloadGuard.js";
+import { failWith, labelBytes, planOf } from "./planning.js";
+
+export const ENVELOPE: Formula = {
+  name: "LW.ENVELOPE",
+  parameters: [
+    { name: "cases", kind: "cases" },
+    { name: "ruleset", kind: "ruleset" },
+    { name: "params", kind: "params", optional: true },
+    { name: "options", kind: "options", optional: true },
+  ],
+  evaluate(args) {
+    const table = given(args.table, "cases");
+    const plan = planOf(args);
+    if (!plan.ok) return plan;
+    const tooBig = payloadProblem("LW.ENVELOPE", {
+      rows: table.components.length,
+      numberColumns: 2,
+      textBytesPerRow: 2 * labelBytes(plan.value) + 40,
+    });
+    if (tooBig) return failWith(tooBig);
+    const entries = envelope(plan.value, table);
+    if (!entries.ok) return entries;
+    return outputTable(
+      given(args.ruleset, "ruleset"),
+      [table.orientation === "rows" ? "component" : "result", "max", "row giving max", "min", "row giving min"],
+      entries.value.map((e) => [e.result, e.max.value, e.max.label, e.min.value, e.min.label]),
+      planNotes(plan.value),
+    );
+  },
+};

@@ -1,0 +1,49 @@
+/**
+ * LW.GOVERNING: the row each criterion selects, with the criterion's value and
+ * every component's concurrent value in that same row. One line per criterion,
+ * in the order given; without criteria, the max and min of every component.
+ */
+import { defaultCriteria, governing } from "../../core/index.js";
+import { given, type Formula, type OutputCell } from "../formula.js";
+import { outputTable, planNotes } from "../outputTable.js";
+import { payloadProblem } from "../payloadGuard.js";
+import { failWith, labelBytes, planOf } from "./planning.js";
+
+export const GOVERNING: Formula = {
+  name: "LW.GOVERNING",
+  parameters: [
+    { name: "cases", kind: "cases" },
+    { name: "ruleset", kind: "ruleset" },
+    { name: "criteria", kind: "criteria", optional: true },
+    { name: "params", kind: "params", optional: true },
+    { name: "options", kind: "options", optional: true },
+  ],
+  evaluate(args) {
+    const table = given(args.table, "cases");
+    const criteria = args.criteria ?? defaultCriteria(table);
+    const plan = planOf(args);
+    if (!plan.ok) return plan;
+    const tooBig = payloadProblem("LW.GOVERNING", {
+      rows: criteria.length,
+      numberColumns: table.components.length + 1,
+      textBytesPerRow: labelBytes(plan.value) + 40,
+    });
+    if (tooBig) return failWith(tooBig);
+    const rows = governing(plan.value, table, criteria);
+    if (!rows.ok) return rows;
+    // The core lists a row that governs several criteria once; a checker reads one line per criterion.
+    const lines: { order: number; cells: OutputCell[] }[] = [];
+    for (const g of rows.value) {
+      g.criteria.forEach((text, k) => {
+        lines.push({ order: criteria.findIndex((c) => c.text === text), cells: [text, g.criterionValues[k], g.label, ...g.values] });
+      });
+    }
+    lines.sort((a, b) => a.order - b.order);
+    return outputTable(
+      given(args.ruleset, "ruleset"),
+      ["criterion", "value", "combination row", ...table.components],
+      lines.map((l) => l.cells),
+      planNotes(plan.value),
+    );
+  },
+};

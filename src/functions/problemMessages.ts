@@ -1,0 +1,79 @@
+/**
+ * The one place where the core's located problems become the message of a
+ * #VALUE! error: the argument's name, the cell on the sheet (from Excel's
+ * parameter addresses), the header, the combination and character position,
+ * then the core's sentence. "cases, Loads!C5 (W:N / V): "abc" is not a number".
+ */
+import { describePlace, type Problem } from "../core/index.js";
+import { PROBLEM_ARGUMENT } from "./argumentKinds.js";
+import type { ArgumentSpec, FormulaArguments } from "./formula.js";
+import { cellName, columnName, parseRangeAddress, rowName, type RangeAddress } from "./rangeAddress.js";
+
+/** At most this many problems are spelt out in one message; the rest are counted. */
+export const MAX_PROBLEMS_SHOWN = 3;
+
+export interface ArgumentAt {
+  spec: ArgumentSpec;
+  range: RangeAddress | null;
+}
+
+/** The argument a formula declares at `index`, with its place on the sheet. */
+export function argumentAt(parameters: readonly ArgumentSpec[], index: number, addresses: readonly string[] | undefined): ArgumentAt {
+  return { spec: parameters[index], range: parseRangeAddress(addresses?.[index]) };
+}
+
+/** The argument of the kind a problem found during evaluation belongs to, if the formula has one. */
+export function argumentOf(p: Problem, parameters: readonly ArgumentSpec[], addresses: readonly string[] | undefined): ArgumentAt | null {
+  const kind = p.place.entry !== undefined ? "ruleset" : PROBLEM_ARGUMENT[p.kind];
+  const index = parameters.findIndex((s) => s.kind === kind);
+  return index < 0 ? null : argumentAt(parameters, index, addresses);
+}
+
+export function problemText(p: Problem, at: ArgumentAt | null, args: FormulaArguments | null): string {
+  const place = { ...p.place };
+  if (at && args) {
+    // A parameter checked against its range names the cell it was written in.
+    if (at.spec.kind === "params" && place.header !== undefined && place.row === undefined) {
+      const where = args.params.where.get(place.header);
+      if (where) Object.assign(place, where);
+    }
+    // A combination typed in cells names its row.
+    if (at.spec.kind === "ruleset" && place.entry !== undefined && place.row === undefined && args.ruleset?.source === "cells") {
+      const row = args.ruleset.entryRows.get(place.entry);
+      if (row !== undefined) Object.assign(place, { row, column: args.ruleset.expressionColumn });
+    }
+  }
+  const range = at?.range ?? null;
+  const { row, column, ...rest } = place;
+  const sentence = p.kind === "cases-duplicate-header" && row !== undefined && column !== undefined ? firstSeenOnSheet(p.message, range, row, column) : p.message;
+  const parts: string[] = [];
+  if (row !== undefined && column !== undefined) parts.push(cellName(range, row, column));
+  else if (row !== undefined) parts.push(rowName(range, row));
+  else if (column !== undefined) parts.push(columnName(range, column));
+  const described = describePlace(rest);
+  if (described !== "") parts.push(described);
+  let where = parts.join(", ");
+  if (place.header !== undefined && !sentence.includes(place.header)) where += where === "" ? `(${place.header})` : ` (${place.header})`;
+  const prefix = at ? (where === "" ? at.spec.name : `${at.spec.name}, ${where}`) : where;
+  return prefix === "" ? sentence : `${prefix}: ${sentence}`;
+}
+
+/**
+ * The core says where a duplicate header was first seen as a row or column of
+ * the table ("also at row 3"); on the sheet that is a cell in the same column
+ * (cases down) or the same row (cases across) as the duplicate.
+ */
+function firstSeenOnSheet(message: string, range: RangeAddress | null, row: number, column: number): string {
+  return message.replace(/\(also at (row|column) ([A-Z]+|\d+)\)/, (whole, kind: string, at: string) => {
+    if (kind === "row") return `(also at ${cellName(range, Number(at) - 1, column)})`;
+    const index = [...at].reduce((n, ch) => n * 26 + ch.charCodeAt(0) - 64, 0) - 1;
+    return index >= 0 ? `(also at ${cellName(range, row, index)})` : whole;
+  });
+}
+
+/** Several problems in one message: the first few in full, the rest counted. */
+export function problemsText(texts: string[]): string {
+  const shown = texts.slice(0, MAX_PROBLEMS_SHOWN).join(" | ");
+  const more = texts.length - MAX_PROBLEMS_SHOWN;
+  return more > 0 ? `${shown} | (and ${more} more problem${more === 1 ? "" : "s"})` : shown;
+}
