@@ -1,0 +1,131 @@
+/**
+ * Every file in rulesets/ is registered, loads, validates, cites a clause for every
+ * combination, names its sources, warns, and carries the verification status its
+ * sources give it — in the engine and in the README.
+ */
+import { readdirSync, readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+import { describe, expect, test } from "vitest";
+import { findShippedRuleset, loadRuleset, shippedRulesets } from "../../src/core/index.js";
+import { allRows, planWith } from "./factorRows.js";
+
+const ROOT = fileURLToPath(new URL("../../", import.meta.url));
+
+/**
+ * The status each ruleset must have, from its sources in shared/REFERENCES.md: "checked" only where
+ * every factor and rule it uses is marked [confirmed] there.
+ */
+const EXPECTED: Record<string, { status: "checked" | "unverified"; citation: string }> = {
+  // Eh = ρ·QE, the F rule carried to the 7-16 numbering, H out of 1.4D: [memory].
+  "asce7-16-strength": { status: "unverified", citation: "ASCE/SEI 7-16 §2.3." },
+  "asce7-16-strength-overstrength": { status: "unverified", citation: "ASCE/SEI 7-16 §2.3." },
+  // §2.4.5 seismic combinations and the ASD rules on F and H: [memory].
+  "asce7-16-asd": { status: "unverified", citation: "ASCE/SEI 7-16 §2.4." },
+  "asce7-16-asd-overstrength": { status: "unverified", citation: "ASCE/SEI 7-16 §2.4." },
+  // ASCE/SEI 7-22: "NOT confirmed; verify before shipping as anything but 'from memory'".
+  "asce7-22-strength": { status: "unverified", citation: "ASCE/SEI 7-22 §2.3." },
+  "asce7-22-asd": { status: "unverified", citation: "ASCE/SEI 7-22 §2.4." },
+  // IBC 2018: only f1 and f2 confirmed.
+  "ibc2018-strength": { status: "unverified", citation: "IBC 2018 §1605.2, Equation 16-" },
+  // EN 1990 Table A1.1, A1.2(A)–(C), expressions 6.10, 6.14b, 6.15b: [confirmed].
+  "en1990-str-6.10": { status: "checked", citation: "EN 1990 (6.10)" },
+  // ξ on γG,sup only: [memory].
+  "en1990-str-6.10ab": { status: "unverified", citation: "EN 1990 (6.10" },
+  "en1990-equ": { status: "checked", citation: "EN 1990 (6.10) with Table A1.2(A)" },
+  "en1990-geo-set-c": { status: "checked", citation: "EN 1990 (6.10) with Table A1.2(C)" },
+  "en1990-sls-characteristic": { status: "checked", citation: "EN 1990 (6.14b)" },
+  "en1990-sls-frequent": { status: "checked", citation: "EN 1990 (6.15b)" },
+  // 6.16b: [memory].
+  "en1990-sls-quasi-permanent": { status: "unverified", citation: "EN 1990 (6.16b)" },
+  // 6.11b apart from the ψ1 or ψ2 choice: [memory].
+  "en1990-accidental": { status: "unverified", citation: "EN 1990 (6.11b)" },
+  // 6.12b [confirmed], but the 100 % + 30 % default from EN 1998-1: [memory].
+  "en1990-seismic": { status: "unverified", citation: "EN 1990 (6.12b)" },
+  // NBCC 2020 factors: [memory].
+  "nbcc2020-uls": { status: "unverified", citation: "NBCC 2020 Table 4.1.3.2.-A, load case " },
+  // AS/NZS 1170.0: [memory only].
+  "asnzs1170-strength": { status: "unverified", citation: "AS/NZS 1170.0:2002 §4.2.2 (" },
+};
+
+/** Values for the parameters that have no default; invented, for planning only. */
+const REQUIRED = { SDS: 1.0, Omega0: 2.0, fSE: 0.5 };
+
+describe("the shipped rulesets", () => {
+  test("are every file in rulesets/, each registered under its file name", () => {
+    const files = readdirSync(`${ROOT}rulesets`).filter((f) => f.endsWith(".json")).map((f) => f.replace(/\.json$/, ""));
+    expect(shippedRulesets().map((s) => s.id).sort()).toEqual(files.sort());
+    expect(Object.keys(EXPECTED).sort()).toEqual(files.sort());
+  });
+
+  test("each load from their file text with no problem", () => {
+    for (const id of Object.keys(EXPECTED)) {
+      const loaded = loadRuleset(readFileSync(`${ROOT}rulesets/${id}.json`, "utf8"));
+      expect(loaded.ok ? [] : loaded.problems).toEqual([]);
+    }
+  });
+
+  test.each(Object.entries(EXPECTED))("%s carries the verification status of its sources", (id, expected) => {
+    const found = findShippedRuleset(id);
+    expect(found?.status.verification).toBe(expected.status);
+    if (expected.status === "unverified") {
+      expect(found?.status.summary).toMatch(/^UNVERIFIED/);
+      expect(found?.status.fromMemory.length).toBeGreaterThan(0);
+    } else {
+      expect(found?.ruleset.file.provenance.every((p) => p.status === "confirmed")).toBe(true);
+    }
+  });
+
+  test.each(Object.entries(EXPECTED))("%s cites its standard's clause on every combination", (id, expected) => {
+    const file = findShippedRuleset(id)?.ruleset.file;
+    for (const c of file?.combinations ?? []) expect(c.clause.startsWith(expected.citation), `${c.id}: ${c.clause}`).toBe(true);
+  });
+
+  test.each(Object.keys(EXPECTED))("%s names its sources, says what each covers and how to verify the recalled ones", (id) => {
+    const provenance = findShippedRuleset(id)?.ruleset.file.provenance ?? [];
+    expect(provenance.length).toBeGreaterThan(0);
+    for (const p of provenance) {
+      expect(p.covers.length).toBeGreaterThan(10);
+      if (p.status === "from-memory") expect(p.note).toMatch(/verify/);
+    }
+  });
+
+  test.each(Object.keys(EXPECTED))("%s carries the cautions and an empty approval block", (id) => {
+    const found = findShippedRuleset(id);
+    const notes = (found?.ruleset.file.notes ?? []).join(" ");
+    expect(notes).toMatch(/reviewed by a qualified, licensed engineer/);
+    expect(notes).toMatch(/govern/);
+    expect(notes).toMatch(/Verify .* before use/);
+    expect(found?.ruleset.file.approval).toEqual({ approvedBy: null, date: null, fingerprint: null });
+    expect(found?.status.approval).toBe("not-approved");
+  });
+
+  test.each(Object.keys(EXPECTED))("%s expands a table of all its symbols into finite factors", (id) => {
+    const ruleset = findShippedRuleset(id)?.ruleset;
+    if (!ruleset) throw new Error(id);
+    const parameters = Object.fromEntries(Object.entries(REQUIRED).filter(([name]) => ruleset.parameterByName.has(name)));
+    const rows = allRows(planWith(ruleset, parameters, ruleset.symbols.map((s) => s.name)));
+    expect(rows.length).toBeGreaterThan(0);
+    for (const r of rows) for (const f of Object.values(r.factors)) expect(Number.isFinite(f)).toBe(true);
+    const skipped = planWith(ruleset, parameters, ruleset.symbols.map((s) => s.name)).combinations.filter((c) => c.skipped);
+    expect(skipped).toEqual([]);
+  });
+});
+
+describe("the README", () => {
+  const readme = readFileSync(`${ROOT}README.md`, "utf8");
+  const section = readme.slice(readme.indexOf("## Shipped rulesets"), readme.indexOf("### Which loads may be absent"));
+
+  test("lists every shipped ruleset with its title and status", () => {
+    const listed = [...section.matchAll(/^\| `([^`]+)` \| ([^|]+) \| ([^|]+) \|/gm)].map((m) => [m[1], m[2].trim(), m[3].trim()]);
+    const expected = shippedRulesets().map((s) => [s.id, s.ruleset.file.title, s.status.verification === "unverified" ? "**UNVERIFIED**" : "checked"]);
+    expect(listed).toEqual(expected);
+  });
+
+  test("says for every shipped ruleset which loads may be absent", () => {
+    const absent = readme.slice(readme.indexOf("### Which loads may be absent"), readme.indexOf("## Tests"));
+    for (const s of shippedRulesets()) {
+      const named = absent.includes(`\`${s.id}\``) || (s.id.startsWith("en1990-") && absent.includes("EN 1990 ULS and SLS"));
+      expect(named, s.id).toBe(true);
+    }
+  });
+});
