@@ -5,8 +5,10 @@
  * [confirmed], which 7-16 keeps; numbering [memory]) on the fixture files
  * described in fixtures/README.md.
  */
+import { readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
 import { describe, expect, test } from "vitest";
-import { csvRows, loadwright } from "./harness.js";
+import { csvRows, loadwright, ROOT } from "./harness.js";
 
 const RULES = ["--ruleset", "strength-fixture.json"];
 
@@ -249,6 +251,35 @@ describe("loadwright explain", () => {
     // ASCE/SEI 7-16 §2.3.1 (1): 1.4·10 = 14.
     expect(rows[1].slice(0, 2)).toEqual(["D", "1.4"]);
     expect(rows.at(-1)).toEqual(["total", "", "1: 1.4D", "", "14"]);
+  });
+});
+
+describe("loadwright rulesets", () => {
+  test("lists every shipped ruleset file, UNVERIFIED where any source is from memory", async () => {
+    const run = await loadwright(["rulesets", "--format", "json"]);
+    expect(run.status).toBe(0);
+    const listed = JSON.parse(run.stdout).rulesets as { id: string; status: string; fingerprint: string }[];
+    // README, "Rulesets": any provenance entry marked from-memory makes a ruleset UNVERIFIED.
+    const files = readdirSync(join(ROOT, "rulesets"))
+      .filter((f) => f.endsWith(".json"))
+      .map((f) => JSON.parse(readFileSync(join(ROOT, "rulesets", f), "utf8")) as { id: string; provenance: { status: string }[] });
+    expect(listed.map((r) => r.id).sort()).toEqual(files.map((f) => f.id).sort());
+    for (const file of files) {
+      const entry = listed.find((r) => r.id === file.id);
+      expect(entry?.status, file.id).toBe(file.provenance.some((p) => p.status === "from-memory") ? "unverified" : "checked");
+      expect(entry?.fingerprint).toMatch(/^[0-9a-f]{64}$/);
+    }
+  });
+
+  test("shows UNVERIFIED in the status column of the table, with the cautions above it", async () => {
+    const unverified = (JSON.parse((await loadwright(["rulesets", "--format", "json"])).stdout).rulesets as { id: string; status: string }[]).filter(
+      (r) => r.status === "unverified",
+    );
+    expect(unverified.length).toBeGreaterThan(0);
+    const run = await loadwright(["rulesets", "--format", "table"]);
+    expect(run.status).toBe(0);
+    expect(run.stdout).toMatch(/Caution: Results must be reviewed by a qualified, licensed engineer/);
+    for (const r of unverified) expect(run.stdout).toMatch(new RegExp(`^${r.id.replace(/\./g, "\\.")}\\s+\\S+\\s+UNVERIFIED\\s`, "m"));
   });
 });
 
