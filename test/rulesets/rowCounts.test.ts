@@ -46,6 +46,18 @@ describe("asce7-16-strength row counts", () => {
     expect(c.total).toBe(369);
   });
 
+  test("gives 359 and 681 rows where 24 wind cases are declared, each also reversed", () => {
+    // The same table with 24 wind directions declared (W:1 … W:24): 48 wind cases with reversal.
+    // Every term acting: 1 + 3 + 3 × (1 + 48) + 48 × 3 + 48 + 8 + 8 = 1 + 3 + 147 + 144 + 48 + 8 + 8 = 359.
+    // With absent variants: 1 + 8 + 4 × (1 + 48 + 1) + 48 × 2 × 4 + 48 + 32 + 8
+    //                     = 1 + 8 + 200 + 384 + 48 + 32 + 8 = 681.
+    const wind24 = Array.from({ length: 24 }, (_, k) => `W:${k + 1}`);
+    const c = counts(planWith(shipped("asce7-16-strength"), { SDS: 1.1 }, ["D", "L", "Lr", "S", "R", ...wind24, "E:x", "E:y"]));
+    expect(c.everyTermActing).toEqual([1, 3, 147, 144, 48, 8, 8]);
+    expect(c.perCombination).toEqual([1, 8, 200, 384, 48, 32, 8]);
+    expect(c.total).toBe(681);
+  });
+
   test("doubles every combination but 1.4D when an earth pressure case H is added", () => {
     // H takes 1.6 where it adds or hResist (default 0) where it resists (ASCE/SEI 7-10 §2.3.2 [confirmed]):
     // two options in combinations 2–7, none in 1.4D [memory]. Every term acting:
