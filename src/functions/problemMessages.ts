@@ -5,6 +5,7 @@
  * then the core's sentence. "cases, Loads!C5 (W:N / V): "abc" is not a number".
  */
 import { describePlace, type Problem } from "../core/index.js";
+import { asMatrix } from "./excelCells.js";
 import { PROBLEM_ARGUMENT } from "./argumentKinds.js";
 import type { ArgumentSpec, FormulaArguments } from "./formula.js";
 import { cellName, columnName, parseRangeAddress, rowName, type RangeAddress } from "./rangeAddress.js";
@@ -15,18 +16,26 @@ export const MAX_PROBLEMS_SHOWN = 3;
 export interface ArgumentAt {
   spec: ArgumentSpec;
   range: RangeAddress | null;
+  /** A one-cell argument needs no cell named when its place on the sheet is unknown (a value typed in the formula). */
+  oneCell: boolean;
 }
 
 /** The argument a formula declares at `index`, with its place on the sheet. */
-export function argumentAt(parameters: readonly ArgumentSpec[], index: number, addresses: readonly string[] | undefined): ArgumentAt {
-  return { spec: parameters[index], range: parseRangeAddress(addresses?.[index]) };
+export function argumentAt(parameters: readonly ArgumentSpec[], index: number, raws: readonly unknown[], addresses: readonly string[] | undefined): ArgumentAt {
+  const m = asMatrix(raws[index]);
+  return { spec: parameters[index], range: parseRangeAddress(addresses?.[index]), oneCell: m !== null && m.length === 1 && m[0].length === 1 };
 }
 
 /** The argument of the kind a problem found during evaluation belongs to, if the formula has one. */
-export function argumentOf(p: Problem, parameters: readonly ArgumentSpec[], addresses: readonly string[] | undefined): ArgumentAt | null {
+export function argumentOf(
+  p: Problem,
+  parameters: readonly ArgumentSpec[],
+  raws: readonly unknown[],
+  addresses: readonly string[] | undefined,
+): ArgumentAt | null {
   const kind = p.place.entry !== undefined ? "ruleset" : PROBLEM_ARGUMENT[p.kind];
   const index = parameters.findIndex((s) => s.kind === kind);
-  return index < 0 ? null : argumentAt(parameters, index, addresses);
+  return index < 0 ? null : argumentAt(parameters, index, raws, addresses);
 }
 
 export function problemText(p: Problem, at: ArgumentAt | null, args: FormulaArguments | null): string {
@@ -47,7 +56,10 @@ export function problemText(p: Problem, at: ArgumentAt | null, args: FormulaArgu
   const { row, column, ...rest } = place;
   const sentence = p.kind === "cases-duplicate-header" && row !== undefined && column !== undefined ? firstSeenOnSheet(p.message, range, row, column) : p.message;
   const parts: string[] = [];
-  if (row !== undefined && column !== undefined) parts.push(cellName(range, row, column));
+  const wholeArgument = range === null && at?.oneCell === true && row === 0 && column === 0;
+  if (wholeArgument) {
+    // The argument is this one cell: its name adds nothing.
+  } else if (row !== undefined && column !== undefined) parts.push(cellName(range, row, column));
   else if (row !== undefined) parts.push(rowName(range, row));
   else if (column !== undefined) parts.push(columnName(range, column));
   const described = describePlace(rest);

@@ -15,14 +15,14 @@ export function evaluateFormula(formula: Formula, raws: readonly unknown[], addr
   try {
     const read = readArguments(formula, raws);
     if (!read.ok) {
-      const at = argumentAt(formula.parameters, read.index, addresses);
+      const at = argumentAt(formula.parameters, read.index, raws, addresses);
       return { ok: false, message: problemsText(read.problems.map((p) => problemText(p, at, null))) };
     }
     const result = formula.evaluate(read.value);
     if (result.ok) return result;
     return {
       ok: false,
-      message: problemsText(result.problems.map((p) => problemText(p, argumentOf(p, formula.parameters, addresses), read.value))),
+      message: problemsText(result.problems.map((p) => problemText(p, argumentOf(p, formula.parameters, raws, addresses), read.value))),
     };
   } catch (e) {
     const reason = e instanceof Error ? e.message : String(e);

@@ -97,6 +97,6 @@ describe("LW.RULESET", () => {
     const backend = memoryBackend({ [STORE_KEY]: JSON.stringify({ format: STORE_FORMAT, rulesets: [broken] }) });
     useRulesetStore(new RulesetStore(backend));
     const text = message(evaluateFormula(RULESET, [[["test-strength"]]]));
-    expect(text).toMatch(/^ruleset, cell A1: the ruleset "test-strength" stored in memory \(not saved\) no longer loads: combinations\[0\]\.expression/);
+    expect(text).toMatch(/^ruleset: the ruleset "test-strength" stored in memory \(not saved\) no longer loads: combinations\[0\]\.expression/);
   });
 });
