@@ -13,5 +13,6 @@ export function planForTable(ruleset: Ruleset, parameters: ParameterInput, table
   return planCombinations(ruleset, resolved.value, {
     cases: table ? table.cases : null,
     modes: table ? table.map.modes : new Map(),
+    reversible: table ? table.map.reversible : new Map(),
   });
 }

@@ -19,11 +19,14 @@ export interface CaseMap {
   symbolOf: ReadonlyMap<string, string>;
   /** Symbol → how its cases combine, overriding the ruleset. */
   modes: ReadonlyMap<string, CaseMode>;
+  /** Symbol → whether its cases are also taken reversed ("both-ways") or not ("one-way"), overriding the ruleset. */
+  reversible: ReadonlyMap<string, boolean>;
 }
 
-export const EMPTY_CASE_MAP: CaseMap = { symbolOf: new Map(), modes: new Map() };
+export const EMPTY_CASE_MAP: CaseMap = { symbolOf: new Map(), modes: new Map(), reversible: new Map() };
 
 const MODES: readonly CaseMode[] = ["sum", "each", "orthogonal"];
+const DIRECTIONS = ["one-way", "both-ways"];
 
 /** The symbol a header names, or a problem naming the header and the symbols there are. */
 export function symbolOfHeader(header: string, ruleset: Ruleset, map: CaseMap = EMPTY_CASE_MAP): { symbol: string } | { error: string } {
@@ -82,33 +85,37 @@ export function readCaseHeaders(
 }
 
 /**
- * A case map range: rows of [header, symbol] to assign a header to a symbol, or
- * [symbol, sum|each|orthogonal] to change how that symbol's cases combine.
+ * A case map range: rows of [header, symbol] to assign a header to a symbol,
+ * [symbol, sum|each|orthogonal] to change how that symbol's cases combine, or
+ * [symbol, one-way|both-ways] to say whether its cases are also taken reversed
+ * (one-way where the table already holds every direction).
  */
 export function readCaseMap(rows: Cell[][], ruleset: Ruleset): Result<CaseMap> {
   const symbolOf = new Map<string, string>();
   const modes = new Map<string, CaseMode>();
+  const reversible = new Map<string, boolean>();
   const problems: Problem[] = [];
   rows.forEach((row, r) => {
     if (row.every(isBlank)) return;
     const first = cellText(row[0]);
     const second = cellText(row[1]);
     if (first === "" || second === "") {
-      problems.push(problem("cases-map", "a case map row needs two cells: [header, symbol] or [symbol, sum|each|orthogonal]", { row: r, column: first === "" ? 0 : 1 }));
+      problems.push(problem("cases-map", "a case map row needs two cells: [header, symbol], [symbol, sum|each|orthogonal] or [symbol, one-way|both-ways]", { row: r, column: first === "" ? 0 : 1 }));
       return;
     }
-    const mode = second.toLowerCase();
-    if ((MODES as readonly string[]).includes(mode)) {
+    const word = second.toLowerCase();
+    if ((MODES as readonly string[]).includes(word) || DIRECTIONS.includes(word)) {
       if (!ruleset.symbolByName.has(first)) {
         problems.push(problem("cases-map", `"${first}" is not a load symbol of ${ruleset.file.id} (symbols: ${ruleset.symbols.map((s) => s.name).join(", ")})`, { row: r, column: 0 }));
         return;
       }
-      modes.set(first, mode as CaseMode);
+      if (DIRECTIONS.includes(word)) reversible.set(first, word === "both-ways");
+      else modes.set(first, word as CaseMode);
       return;
     }
     if (!ruleset.symbolByName.has(second)) {
       problems.push(
-        problem("cases-map", `"${second}" is neither a load symbol of ${ruleset.file.id} nor sum, each or orthogonal`, { row: r, column: 1 }),
+        problem("cases-map", `"${second}" is neither a load symbol of ${ruleset.file.id} nor sum, each, orthogonal, one-way or both-ways`, { row: r, column: 1 }),
       );
       return;
     }
@@ -118,5 +125,5 @@ export function readCaseMap(rows: Cell[][], ruleset: Ruleset): Result<CaseMap> {
     }
     symbolOf.set(first, second);
   });
-  return problems.length > 0 ? fail(...problems) : ok({ symbolOf, modes });
+  return problems.length > 0 ? fail(...problems) : ok({ symbolOf, modes, reversible });
 }

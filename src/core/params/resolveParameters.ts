@@ -14,12 +14,19 @@ export interface ParameterValues {
   choices: ReadonlyMap<string, string>;
   /** Which parameters were given by the user (the rest took their defaults). */
   given: ReadonlySet<string>;
+  /**
+   * Parameters without default that were not given: name → description. Only a
+   * combination that reads one is refused, when it is planned — so a gravity-only
+   * table need not give the seismic SDS.
+   */
+  missing: ReadonlyMap<string, string>;
 }
 
 export function resolveParameters(ruleset: Ruleset, input: ParameterInput = {}): Result<ParameterValues> {
   const problems: Problem[] = [];
   const numbers = new Map<string, number>();
   const choices = new Map<string, string>();
+  const missing = new Map<string, string>();
   const known = ruleset.parameters.map((p) => p.name);
   for (const name of Object.keys(input)) {
     if (!ruleset.parameterByName.has(name)) {
@@ -35,7 +42,7 @@ export function resolveParameters(ruleset: Ruleset, input: ParameterInput = {}):
       let value: number;
       if (given === undefined) {
         if (p.default === undefined) {
-          problems.push(problem("parameter-missing", `parameter ${p.name} has no default; give its value (${p.description})`, place));
+          missing.set(p.name, p.description);
           continue;
         }
         value = p.default;
@@ -68,5 +75,5 @@ export function resolveParameters(ruleset: Ruleset, input: ParameterInput = {}):
     }
   }
   if (problems.length > 0) return fail(...problems);
-  return ok({ numbers, choices, given: new Set(Object.keys(input)) });
+  return ok({ numbers, choices, given: new Set(Object.keys(input)), missing });
 }

@@ -12,12 +12,15 @@ export type ChoiceAssignment = ReadonlyMap<Arith, number>;
 export interface FactorScope {
   /** Parameter and choice-set values. */
   numbers: ReadonlyMap<string, number>;
+  /** Parameters without default that were not given: name → description. */
+  missing: ReadonlyMap<string, string>;
 }
 
 export class FactorError extends Error {
   constructor(
     message: string,
     readonly position: number,
+    readonly kind: "expression-not-finite" | "parameter-missing" = "expression-not-finite",
   ) {
     super(message);
   }
@@ -120,15 +123,13 @@ function evaluate(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope:
 
 function valueOf(name: string, position: number, symbol: LoadSymbol, scope: FactorScope): number {
   const attribute = symbol.attributes.get(name);
-  if (attribute !== undefined) {
-    if (typeof attribute === "number") return attribute;
-    const v = scope.numbers.get(attribute);
-    if (v === undefined) throw new FactorError(`${symbol.name}'s ${name} names "${attribute}", which has no value`, position);
-    return v;
-  }
-  const v = scope.numbers.get(name);
-  if (v === undefined) throw new FactorError(`"${name}" has no value for ${symbol.name}`, position);
-  return v;
+  const valueName = attribute === undefined ? name : attribute;
+  if (typeof valueName === "number") return valueName;
+  const v = scope.numbers.get(valueName);
+  if (v !== undefined) return v;
+  const missing = scope.missing.get(valueName);
+  if (missing !== undefined) throw new FactorError(`parameter ${valueName} has no default; give its value (${missing})`, position, "parameter-missing");
+  throw new FactorError(`"${valueName}" has no value for ${symbol.name}`, position);
 }
 
 /** The factor as a checker reads it, with the chosen option of each choice: "(1.2 + 0.2 × SDS)". */

@@ -25,6 +25,8 @@ export interface PlanInput {
   cases: PlanCase[] | null;
   /** Symbol → how its cases combine, overriding the ruleset (from a case map). */
   modes?: ReadonlyMap<string, CaseMode>;
+  /** Symbol → whether each case is also taken reversed, overriding the ruleset (from a case map). */
+  reversible?: ReadonlyMap<string, boolean>;
 }
 
 export function planCombinations(ruleset: Ruleset, parameters: ParameterValues, input: PlanInput): Result<Plan> {
@@ -41,7 +43,8 @@ export function planCombinations(ruleset: Ruleset, parameters: ParameterValues, 
     const symbol = ruleset.symbolByName.get(name) as LoadSymbol;
     const mode = input.modes?.get(name) ?? symbol.cases;
     const share = typeof symbol.orthogonalShare === "number" ? symbol.orthogonalShare : (parameters.numbers.get(symbol.orthogonalShare) ?? NaN);
-    const states = symbolStates(symbol, casesOf.get(name) ?? [], mode, share);
+    const reversible = input.reversible?.get(name) ?? symbol.reversible;
+    const states = symbolStates(symbol, casesOf.get(name) ?? [], mode, share, reversible);
     if (!states.ok) throw new StateLimit(states.problems);
     stateCache.set(name, states.value);
     return states.value;
@@ -55,7 +58,7 @@ export function planCombinations(ruleset: Ruleset, parameters: ParameterValues, 
       else combinations.push(planned.value);
     } catch (e) {
       if (e instanceof StateLimit) problems.push(...e.problems.map((p) => ({ ...p, place: { ...p.place, entry: combination.id } })));
-      else if (e instanceof FactorError) problems.push(problem("expression-not-finite", e.message, { entry: combination.id, position: e.position }));
+      else if (e instanceof FactorError) problems.push(problem(e.kind, e.message, { entry: combination.id, position: e.position }));
       else throw e;
     }
   }
@@ -73,10 +76,11 @@ class StateLimit extends Error {
 interface Context {
   ruleset: Ruleset;
   parameters: ParameterValues;
-  expression: string;
   statesOf: (symbol: string) => SymbolState[];
   /** Symbol → the state every occurrence takes in this branch. */
   shared: ReadonlyMap<string, SymbolState>;
+  /** Does the table have cases of this symbol? (Always, when planning without a table.) */
+  hasCases: (symbol: string) => boolean;
   leader: string | null;
 }
 
@@ -139,9 +143,9 @@ function planOne(
       const ctx: Context = {
         ruleset,
         parameters,
-        expression,
         statesOf,
         shared: new Map(sharedSymbols.map((s, k) => [s, sharedStates[k]])),
+        hasCases: (s) => !supplied || hasCases(s),
         leader,
       };
       const terms: (PlannedTerm & { leads?: boolean })[] = [];
@@ -196,7 +200,7 @@ function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols:
       const symbol = ctx.ruleset.symbolByName.get(body.name) as LoadSymbol;
       const shared = ctx.shared.get(body.name);
       const states = shared ? [shared] : ctx.statesOf(body.name);
-      const factors = stack.map((e) => evaluateFactor(e.factor, e.choice, symbol, { numbers: ctx.parameters.numbers }));
+      const factors = stack.map((e) => evaluateFactor(e.factor, e.choice, symbol, ctx.parameters));
       const factor = factors.reduce((a, b) => a * b, 1);
       const why = stack.map((e) => factorText(e.factor, e.choice)).concat(attributeNotes(stack, symbol, ctx));
       return states.map((state) => ({
@@ -211,8 +215,10 @@ function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols:
     case "lead":
       return ctx.leader ? bodyOptions({ kind: "symbol", name: ctx.leader, span: body.span }, stack, ctx, leadSymbols) : [{ absent: false, contributions: [] }];
     case "group": {
+      // An alternative whose loads are not in the table is not taken (it is not "no load"), unless none is there.
+      const supplied = body.alternatives.filter((alt) => symbolsOfSum(alt, leadSymbols).some(ctx.hasCases));
       const out: TermOption[] = [];
-      for (const alternative of body.alternatives) for (const o of sumOptions(alternative, stack, ctx, leadSymbols)) out.push(o);
+      for (const alternative of supplied.length > 0 ? supplied : body.alternatives) for (const o of sumOptions(alternative, stack, ctx, leadSymbols)) out.push(o);
       return out;
     }
     case "others":

@@ -4,7 +4,8 @@
  *  - each: one case at a time (each wind direction in turn);
  *  - orthogonal: each case leading at 100 % with every other at the share
  *    (30 %, ASCE/SEI 7-16 §12.5.3), with every sign: n·2^n states;
- * and, for a reversible symbol under sum or each, every state also reversed.
+ * and, for a reversible symbol under sum or each, every state also reversed
+ * (a case map may make a symbol one-way or both ways for one table).
  */
 import { fail, ok, problem, type Result } from "../problems.js";
 import type { CaseMode, LoadSymbol } from "../ruleset/model.js";
@@ -24,20 +25,20 @@ export interface SymbolState {
 /** More states than this for one symbol is refused: it would be a typing error, not a design case. */
 export const MAX_SYMBOL_STATES = 100_000;
 
-export function symbolStates(symbol: LoadSymbol, cases: number[], mode: CaseMode, share: number): Result<SymbolState[]> {
+export function symbolStates(symbol: LoadSymbol, cases: number[], mode: CaseMode, share: number, reversible: boolean): Result<SymbolState[]> {
   if (cases.length === 0) return ok([{ parts: [] }]);
   const reversed = (parts: StatePart[]): StatePart[] => parts.map((p) => ({ ...p, sign: -p.sign, why: p.why ? `${p.why} × -1 (reversed)` : "-1 (reversed)" }));
   switch (mode) {
     case "sum": {
       const parts = cases.map((c) => ({ caseIndex: c, sign: 1, why: "" }));
-      return ok(symbol.reversible ? [{ parts }, { parts: reversed(parts) }] : [{ parts }]);
+      return ok(reversible ? [{ parts }, { parts: reversed(parts) }] : [{ parts }]);
     }
     case "each": {
       const states: SymbolState[] = [];
       for (const c of cases) {
         const parts = [{ caseIndex: c, sign: 1, why: "" }];
         states.push({ parts });
-        if (symbol.reversible) states.push({ parts: reversed(parts) });
+        if (reversible) states.push({ parts: reversed(parts) });
       }
       return ok(states);
     }

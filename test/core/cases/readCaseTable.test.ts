@@ -143,9 +143,9 @@ describe("readCaseMap", () => {
 
   test("names the cell of a row it cannot read", () => {
     expect(messages(readCaseMap([["Wind", "X"], ["Q", "sum"], ["Wind", null]], ruleset))).toEqual([
-      'cell B1: "X" is neither a load symbol of cells nor sum, each or orthogonal',
+      'cell B1: "X" is neither a load symbol of cells nor sum, each, orthogonal, one-way or both-ways',
       'cell A2: "Q" is not a load symbol of cells (symbols: D, L, Lr, S, R, W, E)',
-      "cell B3: a case map row needs two cells: [header, symbol] or [symbol, sum|each|orthogonal]",
+      "cell B3: a case map row needs two cells: [header, symbol], [symbol, sum|each|orthogonal] or [symbol, one-way|both-ways]",
     ]);
   });
 });

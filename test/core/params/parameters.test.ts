@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { describeProblem, loadRuleset, parameterPairs, parseParameterText, resolveParameters, RULESET_FORMAT, type Result, type RulesetFile } from "../../../src/core/index.js";
+import { describeProblem, loadRuleset, parameterPairs, planCombinations, parseParameterText, resolveParameters, RULESET_FORMAT, type Result, type RulesetFile } from "../../../src/core/index.js";
 
 /** Parameters as ASCE/SEI 7-16 and EN 1990 use them; values from shared/REFERENCES.md. */
 const file: RulesetFile = {
@@ -74,10 +74,13 @@ describe("resolveParameters", () => {
     expect(messages(resolveParameters(ruleset, { SDS: 1, Rho: 1.3 }))).toEqual(['unknown parameter "Rho"; did you mean "rho"? (parameters of params-test: SDS, rho, catQ)']);
   });
 
-  test("requires a value for a parameter without default", () => {
-    expect(messages(resolveParameters(ruleset, {}))).toEqual([
-      "parameter SDS has no default; give its value (design spectral response acceleration, short periods)",
-    ]);
+  test("leaves a parameter without default to the combinations that read it", () => {
+    const r = resolveParameters(ruleset, {});
+    expect(r.ok && Object.fromEntries(r.value.missing)).toEqual({ SDS: "design spectral response acceleration, short periods" });
+    // Planned, the combination that reads SDS is refused at the character where it reads it.
+    if (!r.ok) return;
+    const plan = planCombinations(ruleset, r.value, { cases: null });
+    expect(messages(plan)).toEqual(['combination "6", character 12: parameter SDS has no default; give its value (design spectral response acceleration, short periods)']);
   });
 
   test("refuses values outside the range, outside the allowed list, not numbers, or not a choice", () => {

@@ -183,6 +183,20 @@ describe("expansion", () => {
     expect(euroLabels).toContain("6.10: 1.35G + 0.9W [absent: S (leading)]");
   });
 
+  test("takes only the alternatives whose loads are in the table, so a term that always acts never goes empty", () => {
+    // ASCE/SEI 7-22 "W or Wt" [confirmed, design-magazine articles]; with no tornado case only W is taken:
+    // ±W × L present or absent = 4 rows, every one with wind.
+    const rows = factorRows(plan(typed([["4", "1.2D + (1.0W or 1.0Wt)! + L", "x"]]), table(["D", "L", "W"])));
+    expect(rows.sort()).toEqual(["D 1.2, L 1, W 1", "D 1.2, L 1, W -1", "D 1.2, W 1", "D 1.2, W -1"].sort());
+  });
+
+  test("takes a reversible symbol one way where the case map says the table holds every direction", () => {
+    const rows = factorRows(plan(typed([["5", "0.9D + 1.0W!", "x"]]), table(["D", "W:N", "W:S"]), {}, [["W", "one-way"]]));
+    expect(rows).toEqual(["D 0.9, W:N 1", "D 0.9, W:S 1"]);
+    const both = factorRows(plan(typed([["5", "0.9D + 1.0T!", "x"]]), table(["D", "T"]), {}, [["T", "both-ways"]]));
+    expect(both).toEqual(["D 0.9, T 1", "D 0.9, T -1"]);
+  });
+
   test("names the combination and character of a factor that is not a finite number", () => {
     const ruleset = typed([["x", "(1/b)D", "invented"]]);
     const t = readCaseTable(table(["D"]), ruleset);

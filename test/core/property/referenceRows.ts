@@ -11,7 +11,8 @@
  *   `sum` → all cases (and reversed, if reversible), `each` → one case at a
  *   time (and reversed), `orthogonal` → each case leading at 1 with the others
  *   at the share, every sign pattern;
- * - "(a or b)" takes one alternative; a factor "(x or y)" one option;
+ * - "(a or b)" takes one alternative — among those with a load in the table,
+ *   if any; a factor "(x or y)" one option;
  * - "-" negates, "±" takes both signs;
  * - a top-level term may be absent: "?" yes, "!" no, otherwise iff every
  *   symbol in it may be (transient by default); a term inside an alternative
@@ -100,8 +101,10 @@ function bodyVectors(body: Body, factors: { a: Arith; choice: Map<Arith, number>
     }
     case "lead":
       return ctx.leader === null ? [new Map()] : bodyVectors({ kind: "symbol", name: ctx.leader, span: body.span }, factors, ctx);
-    case "group":
-      return body.alternatives.flatMap((alt) => sumVectors(alt.terms, factors, ctx, true));
+    case "group": {
+      const supplied = body.alternatives.filter((alt) => alt.terms.some((t) => symbolsIn(t.body, ctx.leadSymbols).some((s) => (ctx.casesOf.get(s) ?? []).length > 0)));
+      return (supplied.length > 0 ? supplied : body.alternatives).flatMap((alt) => sumVectors(alt.terms, factors, ctx, true));
+    }
     case "others":
       throw new Error("others inside brackets");
   }
