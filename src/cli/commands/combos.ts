@@ -33,7 +33,7 @@ export async function combosCommand(options: CombosOptions, io: Io): Promise<voi
     const map = await caseMapFrom(options.map, chosen.ruleset, delimiter);
     const input = await openCases(options.cases, chosen.ruleset, { layout: layoutOf(options.layout), idColumns: idColumnsOf(options.idColumns), delimiter, map });
     shape = tableShape(input);
-    if (input.kind === "stream") await input.rows.return(undefined);
+    if (input.kind === "stream") await input.close();
   }
   const plan = planOrFail(chosen, parameters, shape);
   const listed = comboRows(plan);

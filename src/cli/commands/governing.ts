@@ -95,7 +95,7 @@ function namesIn(text: string): string[] {
 async function governingOfStream(file: string, prepared: Prepared, first: CaseStream, options: GoverningCommandOptions, io: Io): Promise<void> {
   const { plan, format, chosen } = prepared;
   if (options.criterion.length === 0) {
-    await first.rows.return(undefined);
+    await first.close();
     throw new CliError(
       `${file}: cases are columns here, so every result row is a component; say which rows govern with --criterion (e.g. --criterion "max [C1 top]"), or use \`loadwright envelope\` for every result's largest and smallest value`,
     );

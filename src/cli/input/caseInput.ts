@@ -55,6 +55,8 @@ export interface CaseStream {
   rows: AsyncGenerator<ResultRow>;
   totalBytes: number;
   bytesRead(): number;
+  /** Stop reading (the rows are not wanted, or not all of them). */
+  close(): Promise<void>;
 }
 
 export interface CaseFile {
@@ -229,6 +231,9 @@ function caseStream(
     rows: rows(),
     totalBytes,
     bytesRead: reader.bytesRead,
+    close: async () => {
+      await reader.records.return(undefined);
+    },
   };
 }
 

@@ -68,7 +68,7 @@ export function identityLines(chosen: ChosenRuleset, plan: Plan | null): string[
 export function preambleLines(chosen: ChosenRuleset | null, plan: Plan | null, format: Format): string[] {
   const identity = chosen ? identityLines(chosen, plan) : [];
   const cautions = CAUTIONS.map((c) => `Caution: ${c}`);
-  if (format === "md") return [...identity.map((l) => `> ${l}  `), ">", ...cautions.map((l) => `> ${l}  `), ""];
+  if (format === "md") return [...identity.map((l) => `> ${l}  `), ...(identity.length > 0 ? [">"] : []), ...cautions.map((l) => `> ${l}  `), ""];
   if (format === "table") return [...identity, ...cautions, ""];
   return [...identity, ...cautions].map((l) => `loadwright: ${l}`);
 }
