@@ -140,7 +140,12 @@ async function main() {
   await built;
 
   const manifest = manifestFor(origin);
-  const desktop = wantSideload ? sideload(manifest) : null;
+  let desktop = null;
+  try {
+    desktop = wantSideload ? sideload(manifest) : null;
+  } catch (e) {
+    desktop = [`Could not load the add-in into Excel desktop (${e instanceof Error ? e.message.split("\n")[0] : String(e)}); load it by hand:`];
+  }
   const lines = [
     "",
     `Loadwright is served at ${origin}/ (task pane ${origin}/taskpane.html, functions ${origin}/functions.json).`,
@@ -166,6 +171,7 @@ async function main() {
 }
 
 main().catch((e) => {
-  console.error(`npm start: ${e instanceof Error ? e.message : String(e)}`);
+  const busy = e && e.code === "EADDRINUSE" ? " (another server uses the port: stop it, or choose one with --port N)" : "";
+  console.error(`npm start: ${e instanceof Error ? e.message : String(e)}${busy}`);
   process.exit(1);
 });

@@ -23,6 +23,17 @@ export interface LibraryEntry {
 
 let store = new RulesetStore(memoryBackend());
 
+/** A stored ruleset's status, computed once per loaded content (the fingerprint hashes the whole file). */
+const statusCache = new WeakMap<Ruleset, RulesetStatus>();
+function statusOf(ruleset: Ruleset): RulesetStatus {
+  let status = statusCache.get(ruleset);
+  if (!status) {
+    status = rulesetStatus(ruleset);
+    statusCache.set(ruleset, status);
+  }
+  return status;
+}
+
 /** The entry module chooses where stored rulesets live (workbook settings or browser storage). */
 export function useRulesetStore(next: RulesetStore): void {
   store = next;
@@ -51,7 +62,7 @@ export function library(): Library {
         id: e.id,
         source: "stored",
         ruleset: e.loaded.ok ? e.loaded.value : null,
-        status: e.loaded.ok ? rulesetStatus(e.loaded.value) : null,
+        status: e.loaded.ok ? statusOf(e.loaded.value) : null,
         problem: e.loaded.ok ? null : e.loaded.problems.map((p) => describeProblem(p)).join("; "),
         shippedFingerprint: twin ? twin.status.fingerprint : null,
       });

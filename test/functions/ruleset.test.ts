@@ -80,6 +80,15 @@ describe("LW.RULESET", () => {
     }
   });
 
+  test("uses a stored copy of a shipped ruleset and says that it differs from the shipped one", async () => {
+    const [first] = shippedRulesets();
+    expect(first, "a shipped ruleset").toBeDefined();
+    await rulesetStore().save({ ...first.ruleset.file, version: `${first.ruleset.file.version}-firm` });
+    const table = value(evaluateFormula(RULESET, [[[first.id]]]));
+    expect(field(table, "source")).toBe("stored in this workbook (differs from the shipped ruleset of the same id)");
+    expect(field(table, "version")).toBe(`${first.ruleset.file.version}-firm`);
+  });
+
   test("says a typed ruleset is not checked", () => {
     const table = value(evaluateFormula(RULESET, [STRENGTH_ROWS]));
     expect(field(table, "id")).toBe("(typed in cells)");
