@@ -47,8 +47,8 @@ export const ARGUMENT_KINDS: Record<ArgumentKind, KindReader> = {
 
 /**
  * Which argument a problem found while evaluating belongs to (a parameter out of
- * range belongs to params, a row label that matches nothing to row). Problems
- * that name a combination belong to the ruleset.
+ * range belongs to params, a row label that matches nothing to row). Other
+ * problems that name a combination belong to the ruleset.
  */
 export const PROBLEM_ARGUMENT: Partial<Record<ProblemKind, ArgumentKind>> = {
   "parameter-unknown": "params",

@@ -33,7 +33,8 @@ export function argumentOf(
   raws: readonly unknown[],
   addresses: readonly string[] | undefined,
 ): ArgumentAt | null {
-  const kind = p.place.entry !== undefined ? "ruleset" : PROBLEM_ARGUMENT[p.kind];
+  // A parameter problem belongs to params even where it names the combination that reads the parameter.
+  const kind = PROBLEM_ARGUMENT[p.kind] ?? (p.place.entry !== undefined ? "ruleset" : undefined);
   const index = parameters.findIndex((s) => s.kind === kind);
   return index < 0 ? null : argumentAt(parameters, index, raws, addresses);
 }

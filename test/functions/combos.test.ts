@@ -71,7 +71,7 @@ describe("LW.COMBOS", () => {
 
   test("says which parameter is missing when it has no default", () => {
     const text = message(evaluateFormula(COMBOS, [[["test-seismic"]], [["rho=1.3"]], null]));
-    expect(text).toMatch(/^params: parameter SDS has no default; give its value/);
+    expect(text).toMatch(/^params, combination "6", character \d+: parameter SDS has no default; give its value/);
   });
 
   test("names the row and character of a typed combination that does not parse", () => {
