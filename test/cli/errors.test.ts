@@ -91,6 +91,20 @@ describe("errors in case files", () => {
     expect(lines[0]).toMatch(/symbols: D, L, Lr, S, W/);
   });
 
+  test("suggests --id-columns when a second name column reads as a case header", async () => {
+    const name = file("two-ids.csv", "member,station,D,L\nM1,0,140,420\n");
+    const lines = await refused(["envelope", name, ...RULES]);
+    expect(lines[0]).toMatch(/^two-ids\.csv line 1, column B \(station\): case header "station" names no load symbol/);
+    expect(lines[1]).toBe("if column B is part of each result row's name, say how many columns name a row: --id-columns 2");
+  });
+
+  test("counts lines across empty lines and quoted line breaks", async () => {
+    const name = file("lines.csv", 'case,P,V\nD,140,2\n\n"L",420,5\nW:N,"-50\n",10\nW:E,abc,-8\n');
+    const lines = await refused(["envelope", name, ...RULES]);
+    // Line 1 header, 2 D, 3 empty, 4 L, 5–6 W:N (a quoted line break; "-50" and a break reads as -50), 7 W:E.
+    expect(lines).toEqual(['lines.csv line 7, column B (W:E / P): "abc" is not a number']);
+  });
+
   test("names a mistyped case header down the first column of a cases-as-rows table", async () => {
     const name = file("unknown-rows.csv", "case,P\nD,140\nLx,420\n");
     const lines = await refused(["envelope", name, ...RULES]);

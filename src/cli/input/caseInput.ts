@@ -133,7 +133,9 @@ function checkWidth(file: string, record: CsvRecord, header: CsvRecord): void {
 function wholeTable(file: string, records: CsvRecord[], ruleset: Ruleset, options: CaseFileOptions, reads: (cell: Cell) => boolean): CaseFile {
   for (const record of records) checkWidth(file, record, records[0]);
   const lines = records.map((r) => r.line);
-  const matrix: Cell[][] = records.map((r) => r.cells);
+  // An empty line is a blank row as wide as the others: the core skips blank rows.
+  const width = records[0].cells.length;
+  const matrix: Cell[][] = records.map((r) => (r.cells.every(isBlank) ? new Array<Cell>(width).fill(null) : r.cells));
   const orientation = options.layout === "auto" ? leaningOrientation(matrix, options.idColumns, reads) : options.layout;
   const table = readCaseTable(matrix, ruleset, { orientation, idColumns: options.idColumns, map: options.map, numbersAsText: true });
   if (!table.ok) throw problemsInFile(file, table.problems, csvLocator((row) => lines[row] ?? row + 1));
@@ -176,7 +178,13 @@ function caseStream(
     throw new CliError(`${file} line ${header.line}: the header row names no load case after the ${idColumns} result-id column${idColumns === 1 ? "" : "s"}`);
   }
   const headers = readCaseHeaders(header.cells.slice(idColumns, named), ruleset, options.map, (i) => ({ row: header.line - 1, column: i + idColumns }));
-  if (!headers.ok) throw problemsInFile(file, headers.problems, at);
+  if (!headers.ok) {
+    const error = problemsInFile(file, headers.problems, at);
+    // "station" right after the id column of "member,station,D,L": more columns name a result row.
+    const firstUnknown = headers.problems.find((p) => p.kind === "cases-unknown-symbol" && p.place.column === idColumns);
+    if (firstUnknown) error.more.push(`if column ${columnLetters(idColumns)} is part of each result row's name, say how many columns name a row: --id-columns ${idColumns + 1}`);
+    throw error;
+  }
   const cases = headers.value;
   const valueOptions = { numbersAsText: true };
 

@@ -26,7 +26,8 @@ export interface CsvReader {
 
 export function readCsv(path: string, options: CsvOptions = {}): CsvReader {
   const file = createReadStream(path);
-  const parser = parse({ bom: true, relax_column_count: true, skip_empty_lines: false, info: true, delimiter: options.delimiter ?? "," });
+  // No `info` from the parser (it costs about a third of the parsing time): lines are counted here.
+  const parser = parse({ bom: true, relax_column_count: true, skip_empty_lines: false, delimiter: options.delimiter ?? "," });
   let fileError: unknown = null;
   file.on("error", (e) => {
     fileError = e;
@@ -37,9 +38,11 @@ export function readCsv(path: string, options: CsvOptions = {}): CsvReader {
   async function* records(): AsyncGenerator<CsvRecord> {
     let nextLine = 1;
     try {
-      for await (const item of parser as AsyncIterable<{ record: string[]; info: { lines: number } }>) {
-        yield { cells: item.record, line: nextLine };
-        nextLine = item.info.lines + 1;
+      for await (const cells of parser as AsyncIterable<string[]>) {
+        yield { cells, line: nextLine };
+        // Every line is a record (empty lines too), except where a quoted field holds line breaks.
+        nextLine += 1;
+        for (const cell of cells) for (let at = cell.indexOf("\n"); at >= 0; at = cell.indexOf("\n", at + 1)) nextLine++;
       }
     } catch (e) {
       if (fileError) throw new CliError(`${path}: ${fileErrorText(fileError)}`);
