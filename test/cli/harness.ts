@@ -63,7 +63,11 @@ export async function builtPackage(): Promise<string> {
       mkdirSync(join(staging, "bin"));
       copyFileSync(join(ROOT, "bin/loadwright.js"), join(staging, "bin/loadwright.js"));
       writeFileSync(join(staging, "package.json"), readFileSync(join(ROOT, "package.json")));
-      for (const old of readdirSync(BUILDS)) if (old !== `${hash}.lock` && !old.startsWith(hash)) rmSync(join(BUILDS, old), { recursive: true, force: true });
+      // Builds of other sources an hour old are left over (another run in this checkout may still use a newer one).
+      for (const old of readdirSync(BUILDS)) {
+        const path = join(BUILDS, old);
+        if (!old.startsWith(hash) && Date.now() - statSync(path).mtimeMs > 3_600_000) rmSync(path, { recursive: true, force: true });
+      }
       renameSync(staging, dir);
     } finally {
       rmSync(lock, { recursive: true, force: true });
