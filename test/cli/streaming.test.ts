@@ -5,11 +5,12 @@
  * list [confirmed] for the 7-10 text, numbering [memory]) computed by the test
  * itself. Memory and speed are measured by `npm run bench`, not here.
  */
-import { mkdtempSync, writeFileSync } from "node:fs";
+import { execFileSync } from "node:child_process";
+import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, test } from "vitest";
-import { csvRows, FIXTURES, loadwright } from "./harness.js";
+import { builtPackage, csvRows, FIXTURES, loadwright } from "./harness.js";
 
 const ROWS = 20_000;
 let dir: string;
@@ -77,5 +78,42 @@ describe("a streamed export", () => {
       const { d, w } = loads(i);
       expect(Number(row[1])).toBeCloseTo(0.9 * d + w, 9); // §2.3.1 (5) concurrent: 0.9D + W:N in the same row
     });
+  });
+});
+
+/** util-linux `script` gives the command a terminal; without it (or without a pseudo-terminal) the test is skipped. */
+function terminalAvailable(): boolean {
+  try {
+    execFileSync("script", ["-qec", "true", "/dev/null"], { stdio: "ignore", timeout: 10_000 });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+describe.skipIf(!terminalAvailable())("on a terminal", () => {
+  test("a long streamed run draws a progress bar on standard error and clears it at the end", async () => {
+    const big = join(dir, "big.csv");
+    let csv = "result,D,L,W:N\n";
+    for (let i = 0; i < 200_000; i++) csv += `R${i},${(i % 89) + 1},${i % 31},${(i % 23) - 11}\n`;
+    writeFileSync(big, csv);
+    const bin = join(await builtPackage(), "bin/loadwright.js");
+    const typescript = join(dir, "terminal.txt");
+    const command = `${JSON.stringify(process.execPath)} ${JSON.stringify(bin)} envelope ${JSON.stringify(big)} --ruleset ${JSON.stringify(join(FIXTURES, "strength-fixture.json"))} > /dev/null`;
+    execFileSync("script", ["-qec", command, typescript], { stdio: "ignore", timeout: 120_000 });
+    const screen = readFileSync(typescript, "utf8");
+    expect(screen).toMatch(/envelope \[=+-*\] \d+% \| [\d.]+\/[\d.]+ MB/);
+    expect(screen).toMatch(/\x1b\[2K/); // the bar's line is cleared when the run ends
+  });
+
+  test("writes a text table by default when standard output is a terminal", async () => {
+    const bin = join(await builtPackage(), "bin/loadwright.js");
+    const typescript = join(dir, "table.txt");
+    const command = `${JSON.stringify(process.execPath)} ${JSON.stringify(bin)} envelope ${JSON.stringify(join(FIXTURES, "reactions-rows.csv"))} --ruleset ${JSON.stringify(join(FIXTURES, "strength-fixture.json"))}`;
+    execFileSync("script", ["-qec", command, typescript], { stdio: "ignore", timeout: 60_000 });
+    const screen = readFileSync(typescript, "utf8");
+    expect(screen).toMatch(/result\s+max\s+max row\s+min\s+min row/);
+    // shared/REFERENCES.md "Hand checks" [confirmed]: 1.2·140 + 1.6·420 = 840.
+    expect(screen).toMatch(/P\s+840\s+2: 1\.2D \+ 1\.6L/);
   });
 });
