@@ -4,7 +4,7 @@
  * clause; [memory] marks what is recalled rather than found in a source.
  */
 import { describe, expect, test } from "vitest";
-import { resolveParameters, type Ruleset } from "../../src/core/index.js";
+import { planCombinations, resolveParameters, type Ruleset } from "../../src/core/index.js";
 import { allRows, expectPrintedRows, mayBeAbsent, planWith, printedRows, row, shipped, type FactorRow } from "./factorRows.js";
 
 const GRAVITY_WIND_SEISMIC = ["D", "L", "Lr", "S", "R", "W", "E"];
@@ -91,9 +91,11 @@ describe("asce7-16-strength", () => {
     expect(problems).toEqual(["parameter fL = 0.75 is not one of the allowed values 0.5, 1"]);
   });
 
-  test("asks for SDS rather than assuming one", () => {
-    // SDS is site-specific (§11.4.5 [memory]); no default is safe.
-    expect(parameterProblems(ruleset, {})[0]).toMatch(/^parameter SDS has no default; give its value/);
+  test("asks for SDS rather than assuming one, where a seismic combination is formed", () => {
+    // SDS is site-specific (§11.4.5 [memory]); no default is safe. A gravity-only table forms no
+    // seismic combination (E always acts in them), so it needs no SDS.
+    expect(planProblems(ruleset, {}, ["D", "L", "E:x"])[0]).toMatch(/^parameter SDS has no default; give its value/);
+    expect(planProblems(ruleset, {}, ["D", "L", "S"])).toEqual([]);
   });
 
   test("gives F the factor of D and H 1.6 or its resisting factor", () => {
@@ -147,7 +149,7 @@ describe("asce7-16-strength-overstrength", () => {
 
   test("asks for Ω0 rather than assuming one", () => {
     // Ω0 depends on the seismic force-resisting system (Table 12.2-1 [memory]).
-    expect(parameterProblems(shipped("asce7-16-strength-overstrength"), { SDS })[0]).toMatch(/^parameter Omega0 has no default/);
+    expect(planProblems(shipped("asce7-16-strength-overstrength"), { SDS }, ["D", "E:x"])[0]).toMatch(/^parameter Omega0 has no default/);
   });
 
   test("is a separate ruleset, so that ordinary members never take Ω0", () => {
@@ -220,4 +222,12 @@ describe("the vertical seismic effect", () => {
 function parameterProblems(ruleset: Ruleset, parameters: Record<string, number>): string[] {
   const resolved = resolveParameters(ruleset, parameters);
   return resolved.ok ? [] : resolved.problems.map((p) => p.message);
+}
+
+/** Problems of resolving the parameters and forming the rows for these case headers. */
+function planProblems(ruleset: Ruleset, parameters: Record<string, number>, headers: string[]): string[] {
+  const resolved = resolveParameters(ruleset, parameters);
+  if (!resolved.ok) return resolved.problems.map((p) => p.message);
+  const plan = planCombinations(ruleset, resolved.value, { cases: headers.map((h) => ({ header: h, symbol: h.split(":")[0] })) });
+  return plan.ok ? [] : plan.problems.map((p) => p.message);
 }
