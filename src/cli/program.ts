@@ -12,6 +12,8 @@ import { VERSION } from "./version.js";
 
 const collect = (value: string, previous: string[]) => [...previous, value];
 
+const ROW_LIMIT_HELP = "most concrete rows to list one by one (factored, combos, criteria that are not linear)";
+
 const CAUTION_HELP = `\nCautions:\n${CAUTIONS.map((c) => `  - ${c}`).join("\n")}\n`;
 
 const CASE_FILE_HELP = `
@@ -63,7 +65,8 @@ export function buildProgram(io: Io): Command {
       program
         .command("combos")
         .description("list the concrete combination rows with their clause and factors")
-        .option("--cases <file>", "give factors on the cases of this case file instead of on load symbols"),
+        .option("--cases <file>", "give factors on the cases of this case file instead of on load symbols")
+        .option("--row-limit <n>", ROW_LIMIT_HELP, "200000"),
     ),
   )
     .addHelpText(
@@ -72,7 +75,15 @@ export function buildProgram(io: Io): Command {
     )
     .action((options) => combosCommand(options, io));
 
-  caseOptions(rulesetOptions(program.command("factored").description("every concrete row with the value of every component").argument("<file>", "case file (CSV or JSON)")))
+  caseOptions(
+    rulesetOptions(
+      program
+        .command("factored")
+        .description("every concrete row with the value of every component")
+        .argument("<file>", "case file (CSV or JSON)")
+        .option("--row-limit <n>", ROW_LIMIT_HELP, "200000"),
+    ),
+  )
     .addHelpText("after", `\nExamples:\n  loadwright factored reactions.csv --ruleset my-rules.json\n  loadwright factored reactions.csv -r my-rules.json --format json > factored.json\n${CASE_FILE_HELP}\n${CAUTION_HELP}`)
     .action((file: string, options) => factoredCommand(file, options, io));
 
@@ -89,7 +100,8 @@ export function buildProgram(io: Io): Command {
         .command("governing")
         .description("the rows chosen by criteria, with the concurrent value of every component")
         .argument("<file>", "case file (CSV or JSON)")
-        .option("-c, --criterion <criterion>", 'e.g. "max V", "min N", "max |M|", "max N/2000 + M/350", "max [C1 top]" (repeat it)', collect, []),
+        .option("-c, --criterion <criterion>", 'e.g. "max V", "min N", "max |M|", "max N/2000 + M/350", "max [C1 top]" (repeat it)', collect, [])
+        .option("--row-limit <n>", ROW_LIMIT_HELP, "200000"),
     ),
   )
     .addHelpText(

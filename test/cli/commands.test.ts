@@ -225,6 +225,18 @@ describe("loadwright combos", () => {
   });
 });
 
+describe("the row limit", () => {
+  test("refuses to list more rows than --row-limit and says how to raise it", async () => {
+    // 21 rows by the hand count above ("gives combination rows with clause and a factor on every symbol").
+    const refused = await loadwright(["combos", ...RULES, "--row-limit", "20", "--format", "csv"]);
+    expect(refused.status).toBe(1);
+    expect(refused.stderr).toMatch(/^loadwright: error: ruleset test-fixture-strength: .*21 concrete rows.*more than the limit of 20.*\(raise the limit with --row-limit N\)$/m);
+    const listed = await loadwright(["combos", ...RULES, "--row-limit", "21", "--format", "csv"]);
+    expect(listed.status).toBe(0);
+    expect(csvRows(listed.stdout)).toHaveLength(22);
+  });
+});
+
 describe("loadwright explain", () => {
   test("writes out 1.2 × 140 + 1.6 × 420 = 840 for a row named by its label", async () => {
     const run = await loadwright(["explain", "reactions-rows.csv", ...RULES, "--row", "2: 1.2D + 1.6L", "--component", "P", "--format", "table"]);

@@ -3,7 +3,7 @@
  * with its clause and the factor on every load symbol (or, with --cases, on
  * every case of that table).
  */
-import { comboRows, describeProblem } from "../../core/index.js";
+import { comboRows } from "../../core/index.js";
 import { CliError } from "../cliError.js";
 import { caseMapFrom } from "../input/caseMapOption.js";
 import { openCases, tableShape } from "../input/caseInput.js";
@@ -13,7 +13,7 @@ import { jsonNumber, numberText } from "../output/cells.js";
 import { chooseFormat } from "../output/format.js";
 import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
-import { delimiterOf, idColumnsOf, layoutOf, planOrFail, writePreamble, type Io, type RulesetOptions } from "./common.js";
+import { delimiterOf, idColumnsOf, layoutOf, planOrFail, rowLimitOf, writePreamble, type Io, type RulesetOptions, withRowLimitHint } from "./common.js";
 
 export interface CombosOptions extends RulesetOptions {
   cases?: string;
@@ -21,10 +21,12 @@ export interface CombosOptions extends RulesetOptions {
   idColumns: string;
   delimiter: string;
   map?: string;
+  rowLimit: string;
 }
 
 export async function combosCommand(options: CombosOptions, io: Io): Promise<void> {
   const format = chooseFormat(options.format, io.stdoutIsTerminal);
+  const rowLimit = rowLimitOf(options.rowLimit);
   const chosen = chooseRuleset(options.ruleset);
   const parameters = parameterInput(options.param);
   let shape = null;
@@ -36,8 +38,8 @@ export async function combosCommand(options: CombosOptions, io: Io): Promise<voi
     if (input.kind === "stream") await input.close();
   }
   const plan = planOrFail(chosen, parameters, shape);
-  const listed = comboRows(plan);
-  if (!listed.ok) throw new CliError(`ruleset ${chosen.ruleset.file.id}: ${listed.problems.map((p) => describeProblem(p)).join("; ")}`);
+  const listed = comboRows(plan, rowLimit);
+  if (!listed.ok) throw new CliError(`ruleset ${chosen.ruleset.file.id}: ${listed.problems.map(withRowLimitHint).join("; ")}`);
   const names = plan.cases.map((c) => c.header);
   await writePreamble(io, { chosen, plan, format });
 

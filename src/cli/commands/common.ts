@@ -3,7 +3,7 @@
  * map and case file options, the plan, and writing the preamble where the
  * format wants it.
  */
-import { describeProblem, planForTable, type CaseTable, type Plan } from "../../core/index.js";
+import { describeProblem, planForTable, type CaseTable, type Plan, type Problem } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { caseMapFrom } from "../input/caseMapOption.js";
 import { openCases, tableShape, type CaseInput, type Layout } from "../input/caseInput.js";
@@ -84,6 +84,18 @@ export function layoutOf(option: string): Layout {
 export function idColumnsOf(option: string): number {
   const n = Number(option);
   if (!Number.isInteger(n) || n < 1 || n > 50) throw new CliError(`--id-columns: "${option}" is not a whole number from 1 to 50`);
+  return n;
+}
+
+/** A core problem's text, with how to lift the row limit where that is what stopped it. */
+export function withRowLimitHint(p: Problem): string {
+  return p.kind === "too-many-rows" ? `${describeProblem(p)} (raise the limit with --row-limit N)` : describeProblem(p);
+}
+
+/** --row-limit: a whole number of rows, at least 1. */
+export function rowLimitOf(option: string): number {
+  const n = Number(option.replace(/[_,]/g, ""));
+  if (!Number.isInteger(n) || n < 1) throw new CliError(`--row-limit: "${option}" is not a whole number of rows`);
   return n;
 }
 

@@ -1,19 +1,20 @@
 /** `loadwright factored FILE`: every concrete row with the value of every component (within the row limit). */
-import { describeProblem, factored, type CaseTable } from "../../core/index.js";
+import { factored, type CaseTable } from "../../core/index.js";
 import { CliError } from "../cliError.js";
 import type { CaseInput } from "../input/caseInput.js";
 import { jsonNumber, numberText } from "../output/cells.js";
 import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
-import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
+import { finiteOrFail, noRowsError, prepare, rowLimitOf, writePreamble, type CaseOptions, type Io, withRowLimitHint } from "./common.js";
 
-export async function factoredCommand(file: string, options: CaseOptions, io: Io): Promise<void> {
+export async function factoredCommand(file: string, options: CaseOptions & { rowLimit: string }, io: Io): Promise<void> {
+  const rowLimit = rowLimitOf(options.rowLimit);
   const prepared = await prepare(file, options, io);
   const { plan, format, chosen } = prepared;
   if (plan.rowCount === 0) throw noRowsError(plan, file);
   const table = await wholeTable(prepared.input);
-  const rows = factored(plan, table);
-  if (!rows.ok) throw new CliError(`${file}: ${rows.problems.map((p) => describeProblem(p)).join("; ")}`);
+  const rows = factored(plan, table, rowLimit);
+  if (!rows.ok) throw new CliError(`${file}: ${rows.problems.map(withRowLimitHint).join("; ")}`);
   for (const r of rows.value) r.values.forEach((v, c) => finiteOrFail(v, file, `(${table.components[c]}, row ${r.label})`));
   await writePreamble(io, prepared);
 

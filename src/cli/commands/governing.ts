@@ -9,26 +9,28 @@
  * small table); further passes write every result's value in each governing
  * row. Memory stays flat in the number of result rows, whatever the criteria.
  */
-import { describeProblem, governing, parseCriterion, rowValue, defaultCriteria, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
+import { governing, parseCriterion, rowValue, defaultCriteria, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
 import { distance } from "fastest-levenshtein";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { openCases, type CaseStream } from "../input/caseInput.js";
 import { jsonNumber, numberText } from "../output/cells.js";
 import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
-import { delimiterOf, finiteOrFail, idColumnsOf, layoutOf, noRowsError, prepare, writePreamble, type CaseOptions, type Io, type Prepared } from "./common.js";
+import { delimiterOf, finiteOrFail, idColumnsOf, layoutOf, noRowsError, prepare, rowLimitOf, writePreamble, type CaseOptions, type Io, type Prepared, withRowLimitHint } from "./common.js";
 import { resultsOf } from "./results.js";
 import { caseMapFrom } from "../input/caseMapOption.js";
 
 export interface GoverningCommandOptions extends CaseOptions {
   criterion: string[];
+  rowLimit: string;
 }
 
 export async function governingCommand(file: string, options: GoverningCommandOptions, io: Io): Promise<void> {
+  rowLimitOf(options.rowLimit);
   const prepared = await prepare(file, options, io);
   const { plan, input } = prepared;
   if (plan.rowCount === 0) throw noRowsError(plan, file);
-  if (input.kind === "table") return governingOfTable(file, prepared, input.table, options.criterion, io);
+  if (input.kind === "table") return governingOfTable(file, prepared, input.table, options, io);
   return governingOfStream(file, prepared, input, options, io);
 }
 
@@ -44,11 +46,12 @@ function criteriaOrFail(texts: string[], components: readonly string[]): Criteri
   return criteria;
 }
 
-async function governingOfTable(file: string, prepared: Prepared, table: CaseTable, texts: string[], io: Io): Promise<void> {
+async function governingOfTable(file: string, prepared: Prepared, table: CaseTable, options: GoverningCommandOptions, io: Io): Promise<void> {
   const { plan, format, chosen } = prepared;
+  const texts = options.criterion;
   const criteria = texts.length > 0 ? criteriaOrFail(texts, table.components) : defaultCriteria(table);
-  const result = governing(plan, table, criteria);
-  if (!result.ok) throw cliErrorOf(result.problems.map((p) => `${file}: ${describeProblem(p)}`));
+  const result = governing(plan, table, criteria, { rowLimit: rowLimitOf(options.rowLimit) });
+  if (!result.ok) throw cliErrorOf(result.problems.map((p) => `${file}: ${withRowLimitHint(p)}`));
   for (const g of result.value) g.values.forEach((v, c) => finiteOrFail(v, file, `(${table.components[c]}, row ${g.label})`));
   await writePreamble(io, prepared);
   if (format === "json") {
@@ -129,8 +132,8 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
   const components = [...found.keys()];
   const reduced: CaseTable = { orientation: "columns", cases: first.cases, components, values: components.map((c) => found.get(c) as Float64Array), map: first.map };
   const criteria = criteriaOrFail(options.criterion, components);
-  const chosenRows = governing(plan, reduced, criteria);
-  if (!chosenRows.ok) throw cliErrorOf(chosenRows.problems.map((p) => `${file}: ${describeProblem(p)}`));
+  const chosenRows = governing(plan, reduced, criteria, { rowLimit: rowLimitOf(options.rowLimit) });
+  if (!chosenRows.ok) throw cliErrorOf(chosenRows.problems.map((p) => `${file}: ${withRowLimitHint(p)}`));
   const rows = chosenRows.value;
   await writePreamble(io, prepared);
 
