@@ -52,6 +52,8 @@ export interface Place {
   column?: number;
   /** The header the problem concerns (case header, component name, parameter name). */
   header?: string;
+  /** A second place in the same matrix the problem concerns (the first of two duplicate headers). */
+  also?: { row: number; column: number };
 }
 
 export interface Problem {
@@ -126,7 +128,8 @@ export function describePlace(place: Place, options: DescribeOptions = {}): stri
 /** Place and message in one line: `combination "3", character 14: unknown name "rhoE" …`. */
 export function describeProblem(p: Problem, options: DescribeOptions = {}): string {
   const where = describePlace(p.place, options);
-  return where === "" ? p.message : `${where}: ${p.message}`;
+  const also = p.place.also ? ` (also at ${describePlace({ row: p.place.also.row, column: p.place.also.column }, options).replace(/^cell /, "")})` : "";
+  return where === "" ? `${p.message}${also}` : `${where}: ${p.message}${also}`;
 }
 
 /** Prefix every problem's place with an outer path (e.g. a combination index). */

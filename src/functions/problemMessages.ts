@@ -54,8 +54,8 @@ export function problemText(p: Problem, at: ArgumentAt | null, args: FormulaArgu
     }
   }
   const range = at?.range ?? null;
-  const { row, column, ...rest } = place;
-  const sentence = p.kind === "cases-duplicate-header" && row !== undefined && column !== undefined ? firstSeenOnSheet(p.message, range, row, column) : p.message;
+  const { row, column, also, ...rest } = place;
+  const sentence = also ? `${p.message} (also at ${cellName(range, also.row, also.column)})` : p.message;
   const parts: string[] = [];
   const wholeArgument = range === null && at?.oneCell === true && row === 0 && column === 0;
   if (wholeArgument) {
@@ -69,19 +69,6 @@ export function problemText(p: Problem, at: ArgumentAt | null, args: FormulaArgu
   if (place.header !== undefined && !sentence.includes(place.header)) where += where === "" ? `(${place.header})` : ` (${place.header})`;
   const prefix = at ? (where === "" ? at.spec.name : `${at.spec.name}, ${where}`) : where;
   return prefix === "" ? sentence : `${prefix}: ${sentence}`;
-}
-
-/**
- * The core says where a duplicate header was first seen as a row or column of
- * the table ("also at row 3"); on the sheet that is a cell in the same column
- * (cases down) or the same row (cases across) as the duplicate.
- */
-function firstSeenOnSheet(message: string, range: RangeAddress | null, row: number, column: number): string {
-  return message.replace(/\(also at (row|column) ([A-Z]+|\d+)\)/, (whole, kind: string, at: string) => {
-    if (kind === "row") return `(also at ${cellName(range, Number(at) - 1, column)})`;
-    const index = [...at].reduce((n, ch) => n * 26 + ch.charCodeAt(0) - 64, 0) - 1;
-    return index >= 0 ? `(also at ${cellName(range, row, index)})` : whole;
-  });
 }
 
 /** Several problems in one message: the first few in full, the rest counted. */

@@ -3,7 +3,7 @@
  * with Loadwright, or a range of [id, expression, clause] rows typed in cells.
  */
 import { closest } from "fastest-levenshtein";
-import { cellText, isBlank, rulesetFromRows, rulesetStatus, type Cell, type Problem, type Result } from "../core/index.js";
+import { rulesetFromRows, rulesetStatus, type Cell, type Problem, type Result } from "../core/index.js";
 import { findInLibrary, library, storeLocation } from "../addin/rulesetLibrary.js";
 import { asMatrix, blankZeroRows, isEmptyArgument } from "./excelCells.js";
 import type { ResolvedRuleset } from "./formula.js";
@@ -70,28 +70,8 @@ function typed(rows: Cell[][]): Result<ResolvedRuleset> {
       status: rulesetStatus(ruleset),
       source: "cells",
       shippedFingerprint: null,
-      entryRows: entryRows(rows, width, ruleset.combinations.map((c) => c.id)),
+      entryRows: new Map(ruleset.combinations.map((c) => [c.id, c.sourceRow ?? 0])),
       expressionColumn: width === 1 ? 0 : 1,
     },
   };
-}
-
-/**
- * The sheet row of each typed combination, so that a problem the planner finds
- * later (a factor that is not finite, too many rows) points at its row.
- */
-function entryRows(rows: Cell[][], width: number, ids: string[]): Map<string, number> {
-  const out = new Map<string, number>();
-  const filled = rows.map((row, r) => ({ row, r })).filter(({ row }) => !row.every(isBlank));
-  if (width === 1) {
-    // Expressions alone are numbered 1, 2, … in order; a header row "expression" is not one of them.
-    const body = filled.filter(({ row, r }) => !(r === 0 && cellText(row[0]).toLowerCase() === "expression"));
-    body.forEach(({ r }, k) => out.set(String(k + 1), r));
-    return out;
-  }
-  for (const { row, r } of filled) {
-    const id = cellText(row[0]);
-    if (ids.includes(id) && !out.has(id)) out.set(id, r);
-  }
-  return out;
 }

@@ -40,12 +40,12 @@ describe("case table argument", () => {
 
   test("names a header that is no load symbol of the ruleset once the orientation is known", () => {
     const text = message(evaluateFormula(ENVELOPE, [withCell(3, 0, "Wn"), STRENGTH_ROWS, null, [["orientation=rows"]]], AT));
-    expect(text).toMatch(/^cases, Loads!B6: case header "Wn" names no load symbol of cells/);
+    expect(text).toMatch(/^cases, Loads!B6: case header "Wn" names no load symbol of the typed ruleset; did you mean "W:n"\?/);
   });
 
-  test("says neither side holds load cases when no orientation is given and a header is wrong", () => {
+  test("names one wrong header where most headers read as cases, with no orientation given", () => {
     const text = message(evaluateFormula(ENVELOPE, [withCell(3, 0, "Wn"), STRENGTH_ROWS, null, null], AT));
-    expect(text).toMatch(/^cases: neither the first row nor the first column holds load cases/);
+    expect(text).toMatch(/^cases, Loads!B6: case header "Wn" names no load symbol of the typed ruleset/);
   });
 
   test("names the first cell of a duplicate header in a table with cases across", () => {

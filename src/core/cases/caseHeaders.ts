@@ -4,8 +4,8 @@
  * a symbol, and change how a symbol's several cases combine.
  */
 import { cellText, isBlank, type Cell } from "../cells.js";
-import { columnLetters, fail, ok, problem, type Problem, type Result } from "../problems.js";
-import type { CaseMode, Ruleset } from "../ruleset/model.js";
+import { fail, ok, problem, type Problem, type Result } from "../problems.js";
+import { type CaseMode, type Ruleset, rulesetName } from "../ruleset/model.js";
 import { nearest } from "../text/nearest.js";
 
 export interface LoadCase {
@@ -39,10 +39,13 @@ export function symbolOfHeader(header: string, ruleset: Ruleset, map: CaseMap = 
   }
   if (ruleset.symbolByName.has(symbol)) return { symbol };
   const known = ruleset.symbols.map((s) => s.name);
-  const guess = nearest(symbol, known);
+  // "Wn", "E1": a symbol and a short case name run together; otherwise the nearest symbol's spelling.
+  const prefix = colon < 0 ? [...known].sort((a, b) => b.length - a.length).find((k) => symbol.startsWith(k) && /^([A-Za-z]{1,2}|\d+)$/.test(symbol.slice(k.length))) : undefined;
+  const sameLetters = known.find((k) => k.toLowerCase() === symbol.toLowerCase());
+  const guess = sameLetters ?? (prefix ? `${prefix}:${symbol.slice(prefix.length)}` : nearest(symbol, known));
   return {
     error:
-      `case header "${header}" names no load symbol of ${ruleset.file.id}` +
+      `case header "${header}" names no load symbol of ${rulesetName(ruleset)}` +
       (guess ? `; did you mean "${guess}"?` : "") +
       ` (symbols: ${known.join(", ")}; write SYMBOL or SYMBOL:name, or assign the header in a case map)`,
   };
@@ -67,10 +70,7 @@ export function readCaseHeaders(
     }
     const before = firstSeen.get(header);
     if (before !== undefined) {
-      const b = at(before);
-      problems.push(
-        problem("cases-duplicate-header", `case header "${header}" appears twice (also at ${b.row === place.row ? "column" : "row"} ${b.row === place.row ? columnLetters(b.column) : b.row + 1})`, { ...place, header }),
-      );
+      problems.push(problem("cases-duplicate-header", `case header "${header}" appears twice`, { ...place, header, also: at(before) }));
       return;
     }
     firstSeen.set(header, i);
@@ -106,7 +106,7 @@ export function readCaseMap(rows: Cell[][], ruleset: Ruleset): Result<CaseMap> {
     const word = second.toLowerCase();
     if ((MODES as readonly string[]).includes(word) || DIRECTIONS.includes(word)) {
       if (!ruleset.symbolByName.has(first)) {
-        problems.push(problem("cases-map", `"${first}" is not a load symbol of ${ruleset.file.id} (symbols: ${ruleset.symbols.map((s) => s.name).join(", ")})`, { row: r, column: 0 }));
+        problems.push(problem("cases-map", `"${first}" is not a load symbol of ${rulesetName(ruleset)} (symbols: ${ruleset.symbols.map((s) => s.name).join(", ")})`, { row: r, column: 0 }));
         return;
       }
       if (DIRECTIONS.includes(word)) reversible.set(first, word === "both-ways");
@@ -115,7 +115,7 @@ export function readCaseMap(rows: Cell[][], ruleset: Ruleset): Result<CaseMap> {
     }
     if (!ruleset.symbolByName.has(second)) {
       problems.push(
-        problem("cases-map", `"${second}" is neither a load symbol of ${ruleset.file.id} nor sum, each, orthogonal, one-way or both-ways`, { row: r, column: 1 }),
+        problem("cases-map", `"${second}" is neither a load symbol of ${rulesetName(ruleset)} nor sum, each, orthogonal, one-way or both-ways`, { row: r, column: 1 }),
       );
       return;
     }

@@ -68,15 +68,21 @@ function trimBlankEdges(matrix: Cell[][]): Cell[][] {
   return matrix.slice(0, rows).map((r) => (r.length > width ? r.slice(0, width) : r));
 }
 
+/**
+ * Cases as columns when the first row's headers read as cases, as rows when the
+ * first column's do. Where neither reads fully, the side where most do is taken,
+ * so that one mistyped header is reported by name rather than as "no cases".
+ */
 function detectOrientation(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idColumns: number): Result<Orientation> {
-  const reads = (cells: Cell[]) => cells.length > 0 && cells.every((c) => !("error" in symbolOfHeader(cellText(c), ruleset, map)));
-  const firstRow = rows[0].slice(idColumns);
+  const share = (cells: Cell[]) => (cells.length === 0 ? 0 : cells.filter((c) => !("error" in symbolOfHeader(cellText(c), ruleset, map))).length / cells.length);
+  const firstRow = rows[0].slice(idColumns).filter((c) => !isBlank(c));
   const firstColumn = rows.slice(1).map((r) => r[0]).filter((c) => !isBlank(c));
-  const asColumns = reads(firstRow);
-  const asRows = reads(firstColumn);
-  if (asColumns && !asRows) return ok("columns");
-  if (asRows && !asColumns) return ok("rows");
-  if (asRows && asColumns) {
+  const asColumns = share(firstRow);
+  const asRows = share(firstColumn);
+  if (asColumns === 1 && asRows < 1) return ok("columns");
+  if (asRows === 1 && asColumns < 1) return ok("rows");
+  if (asRows < 1 && asColumns < 1 && Math.max(asRows, asColumns) >= 0.5 && asRows !== asColumns) return ok(asRows > asColumns ? "rows" : "columns");
+  if (asRows === 1 && asColumns === 1) {
     return fail(problem("cases-orientation", "both the first row and the first column read as load cases; say which holds the cases (orientation rows or columns)"));
   }
   const symbols = ruleset.symbols.map((s) => s.name).join(", ");
@@ -134,9 +140,10 @@ function componentNames(cells: Cell[], at: (i: number) => { row: number; column:
   const seen = new Map<string, number>();
   cells.forEach((cell, i) => {
     const name = cellText(cell);
+    const first = seen.get(name);
     if (name === "") problems.push(problem("cases-header", "the component header is empty", at(i)));
-    else if (seen.has(name)) problems.push(problem("cases-duplicate-header", `component "${name}" appears twice`, { ...at(i), header: name }));
-    seen.set(name, i);
+    else if (first !== undefined) problems.push(problem("cases-duplicate-header", `component "${name}" appears twice`, { ...at(i), header: name, also: at(first) }));
+    else seen.set(name, i);
     names.push(name);
   });
   return names;

@@ -7,6 +7,7 @@
  *   2: 1.2D + 1.6L [absent: 0.5(Lr or S or R)]
  *   6.10: 1.35G + 1.5Q + 0.75S [Q leading; absent: W]
  */
+import { rulesetName } from "../ruleset/model.js";
 import type { CaseTable } from "../cases/readCaseTable.js";
 import { fail, ok, problem, type Result } from "../problems.js";
 import { formatNumber } from "../plan/factor.js";
@@ -137,6 +138,6 @@ export function noRows(plan: Plan) {
   const skipped = plan.combinations.filter((c) => c.skipped).map((c) => `${c.combination.id} (${c.skipped})`);
   return problem(
     "unknown-row",
-    `no combination of ${plan.ruleset.file.id} applies to this case table${skipped.length ? `: ${skipped.join("; ")}` : ""}`,
+    `no combination of ${rulesetName(plan.ruleset)} applies to this case table${skipped.length ? `: ${skipped.join("; ")}` : ""}`,
   );
 }

@@ -3,7 +3,7 @@
  * their allowed ranges, defaults for the rest, and the values each choice sets.
  */
 import { fail, ok, problem, type Problem, type Result } from "../problems.js";
-import type { Ruleset } from "../ruleset/model.js";
+import { type Ruleset, rulesetName } from "../ruleset/model.js";
 import { nearest } from "../text/nearest.js";
 import type { ParameterInput } from "./parameterInput.js";
 
@@ -31,7 +31,7 @@ export function resolveParameters(ruleset: Ruleset, input: ParameterInput = {}):
   for (const name of Object.keys(input)) {
     if (!ruleset.parameterByName.has(name)) {
       const guess = nearest(name, known);
-      const list = known.length > 0 ? `parameters of ${ruleset.file.id}: ${known.join(", ")}` : `${ruleset.file.id} has no parameters`;
+      const list = known.length > 0 ? `parameters of ${rulesetName(ruleset)}: ${known.join(", ")}` : `${rulesetName(ruleset)} has no parameters`;
       problems.push(problem("parameter-unknown", `unknown parameter "${name}"${guess ? `; did you mean "${guess}"?` : ""} (${list})`, { header: name }));
     }
   }

@@ -43,6 +43,8 @@ export type Parameter = NumberParameter | ChoiceParameter;
 export interface Combination {
   index: number;
   id: string;
+  /** For a ruleset typed in cells: the 0-based row of the range it was typed on. */
+  sourceRow?: number;
   clause: string;
   expression: string;
   description?: string;
@@ -64,4 +66,9 @@ export interface Ruleset {
   /** Every name a factor may use, and what it is. */
   values: ReadonlyMap<string, ValueKind>;
   combinations: Combination[];
+}
+
+/** How messages name a ruleset: its id, or "the typed ruleset" for one typed in cells. */
+export function rulesetName(ruleset: Ruleset): string {
+  return ruleset.origin === "cells" ? "the typed ruleset" : ruleset.file.id;
 }

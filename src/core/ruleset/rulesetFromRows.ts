@@ -82,5 +82,6 @@ export function rulesetFromRows(rows: Cell[][]): Result<Ruleset> {
       }),
     );
   }
+  built.value.combinations.forEach((c, i) => (c.sourceRow = sheetRowOf[i]));
   return built;
 }

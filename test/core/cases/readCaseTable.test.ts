@@ -97,18 +97,24 @@ describe("readCaseTable", () => {
 
   test("names a header that names no symbol, with the symbols there are and a likely fix", () => {
     expect(messages(readCaseTable([["", "P"], ["D", 1], ["LR", 2]], ruleset, { orientation: "rows" }))).toEqual([
-      'cell A3: case header "LR" names no load symbol of cells; did you mean "Lr"? (symbols: D, L, Lr, S, R, W, E; write SYMBOL or SYMBOL:name, or assign the header in a case map)',
+      'cell A3: case header "LR" names no load symbol of the typed ruleset; did you mean "Lr"? (symbols: D, L, Lr, S, R, W, E; write SYMBOL or SYMBOL:name, or assign the header in a case map)',
     ]);
   });
 
   test("names both places of a duplicate case header", () => {
-    expect(messages(readCaseTable([["id", "D", "L", "D"], ["x", 1, 2, 3]], ruleset))).toEqual(['cell D1: case header "D" appears twice (also at column B)']);
+    expect(messages(readCaseTable([["id", "D", "L", "D"], ["x", 1, 2, 3]], ruleset))).toEqual(['cell D1: case header "D" appears twice (also at B1)']);
   });
 
   test("names a duplicate or empty component header", () => {
     expect(messages(readCaseTable([["", "P", "P", null], ["D", 1, 2, 3]], ruleset))).toEqual([
-      'cell C1: component "P" appears twice',
+      'cell C1: component "P" appears twice (also at B1)',
       "cell D1: the component header is empty",
+    ]);
+  });
+
+  test("names one mistyped header where most headers read as cases", () => {
+    expect(messages(readCaseTable([["", "P", "V"], ["D", 140, 2], ["L", 420, 5], ["Wn", -50, 10]], ruleset))).toEqual([
+      'cell A4: case header "Wn" names no load symbol of the typed ruleset; did you mean "W:n"? (symbols: D, L, Lr, S, R, W, E; write SYMBOL or SYMBOL:name, or assign the header in a case map)',
     ]);
   });
 
@@ -143,8 +149,8 @@ describe("readCaseMap", () => {
 
   test("names the cell of a row it cannot read", () => {
     expect(messages(readCaseMap([["Wind", "X"], ["Q", "sum"], ["Wind", null]], ruleset))).toEqual([
-      'cell B1: "X" is neither a load symbol of cells nor sum, each, orthogonal, one-way or both-ways',
-      'cell A2: "Q" is not a load symbol of cells (symbols: D, L, Lr, S, R, W, E)',
+      'cell B1: "X" is neither a load symbol of the typed ruleset nor sum, each, orthogonal, one-way or both-ways',
+      'cell A2: "Q" is not a load symbol of the typed ruleset (symbols: D, L, Lr, S, R, W, E)',
       "cell B3: a case map row needs two cells: [header, symbol], [symbol, sum|each|orthogonal] or [symbol, one-way|both-ways]",
     ]);
   });
