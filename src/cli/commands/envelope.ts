@@ -1,10 +1,9 @@
 /** `loadwright envelope FILE`: per component or result row, the largest and smallest value with the row that gives each. */
-import { extremes } from "../../core/index.js";
+import { envelopeOf } from "../../core/index.js";
 import { jsonNumber, numberText } from "../output/cells.js";
 import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
-import { labelCache } from "./labelCache.js";
 import { resultsOf } from "./results.js";
 
 export async function envelopeCommand(file: string, options: CaseOptions, io: Io): Promise<void> {
@@ -13,18 +12,17 @@ export async function envelopeCommand(file: string, options: CaseOptions, io: Io
   if (plan.rowCount === 0) throw noRowsError(plan, file);
   await writePreamble(io, prepared);
   const { out } = io;
-  const label = labelCache(plan);
 
   if (format === "json") {
     out.line(`{"ruleset":${JSON.stringify(rulesetJson(chosen))},"parameters":${JSON.stringify(parametersJson(plan))},"cautions":${JSON.stringify(CAUTIONS)},"envelope":[`);
     let first = true;
     for await (const r of resultsOf(input, "envelope")) {
-      const e = extremes(plan, r.values);
+      const e = envelopeOf(plan, r.id, r.values);
       if (!e) throw noRowsError(plan, file);
       const entry = {
         result: r.id,
-        max: { value: jsonNumber(finiteOrFail(e.max.value, file, r.where)), row: label(e.max.row) },
-        min: { value: jsonNumber(finiteOrFail(e.min.value, file, r.where)), row: label(e.min.row) },
+        max: { value: jsonNumber(finiteOrFail(e.max.value, file, r.where)), row: e.max.label },
+        min: { value: jsonNumber(finiteOrFail(e.min.value, file, r.where)), row: e.min.label },
       };
       out.line(`${first ? "" : ","}${JSON.stringify(entry)}`);
       first = false;
@@ -44,14 +42,14 @@ export async function envelopeCommand(file: string, options: CaseOptions, io: Io
     { title: "min row" },
   ]);
   for await (const r of resultsOf(input, "envelope")) {
-    const e = extremes(plan, r.values);
+    const e = envelopeOf(plan, r.id, r.values);
     if (!e) throw noRowsError(plan, file);
     await writer.row([
       r.id,
       numberText(finiteOrFail(e.max.value, file, r.where)),
-      label(e.max.row),
+      e.max.label,
       numberText(finiteOrFail(e.min.value, file, r.where)),
-      label(e.min.row),
+      e.min.label,
     ]);
     if (out.isClosed) return;
   }
