@@ -23,9 +23,11 @@ export function csvLocator(lineOf: (row: number) => number): CellLocator {
 /** One located line: `file line L, column C (header): message`, or `file: message` where the core gave no cell. */
 export function describeInFile(file: string, p: Problem, at: CellLocator): string {
   const { row, column, header, ...rest } = p.place;
-  const bare: Problem = { ...p, place: rest };
+  // What is left (JSON path, entry, character, a second cell such as a duplicate's first place) the core words;
+  // the callback turns that second cell into the file's line and column too.
+  const text = describeProblem({ ...p, place: rest }, { cell: at.cell });
   const named = header !== undefined ? ` (${header})` : "";
-  if (row !== undefined && column !== undefined) return `${file} ${at.cell(row, column)}${named}: ${describeProblem(bare)}`;
-  if (row !== undefined) return `${file} ${at.row(row)}${named}: ${describeProblem(bare)}`;
-  return `${file}: ${describeProblem(bare)}`;
+  if (row !== undefined && column !== undefined) return `${file} ${at.cell(row, column)}${named}: ${text}`;
+  if (row !== undefined) return `${file} ${at.row(row)}${named}: ${text}`;
+  return `${file}: ${text}`;
 }
