@@ -95,6 +95,10 @@ function namesIn(text: string): string[] {
   return names;
 }
 
+function idColumnsText(n: number): string {
+  return n === 1 ? "a result row's id is its first cell" : `a result row's id is its first ${n} cells joined with " / "`;
+}
+
 async function governingOfStream(file: string, prepared: Prepared, first: CaseStream, options: GoverningCommandOptions, io: Io): Promise<void> {
   const { plan, format, chosen } = prepared;
   if (options.criterion.length === 0) {
@@ -125,7 +129,7 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
       missing.map((name) => {
         const text = options.criterion.find((t) => namesIn(t).includes(name)) ?? "";
         const guess = closest.get(name);
-        return `--criterion "${text}": no result row of ${file} is named "${name}"${guess ? `; did you mean "${guess.id}"?` : ""} (result ids are the first ${idColumnsOf(options.idColumns)} column${options.idColumns === "1" ? "" : "s"}, joined with " / "; write names with spaces in [brackets])`;
+        return `--criterion "${text}": no result row of ${file} is named "${name}"${guess ? `; did you mean "${guess.id}"?` : ""} (${idColumnsText(idColumnsOf(options.idColumns))}; write names with spaces in [brackets])`;
       }),
     );
   }
