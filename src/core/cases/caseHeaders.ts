@@ -25,7 +25,7 @@ export interface CaseMap {
 
 export const EMPTY_CASE_MAP: CaseMap = { symbolOf: new Map(), modes: new Map(), reversible: new Map() };
 
-const MODES: readonly CaseMode[] = ["sum", "each", "orthogonal"];
+const MODES: readonly CaseMode[] = ["sum", "each", "orthogonal", "independent"];
 const DIRECTIONS = ["one-way", "both-ways"];
 
 /** The symbol a header names, or a problem naming the header and the symbols there are. */
@@ -86,7 +86,7 @@ export function readCaseHeaders(
 
 /**
  * A case map range: rows of [header, symbol] to assign a header to a symbol,
- * [symbol, sum|each|orthogonal] to change how that symbol's cases combine, or
+ * [symbol, sum|each|orthogonal|independent] to change how that symbol's cases combine, or
  * [symbol, one-way|both-ways] to say whether its cases are also taken reversed
  * (one-way where the table already holds every direction).
  */
@@ -100,7 +100,7 @@ export function readCaseMap(rows: Cell[][], ruleset: Ruleset): Result<CaseMap> {
     const first = cellText(row[0]);
     const second = cellText(row[1]);
     if (first === "" || second === "") {
-      problems.push(problem("cases-map", "a case map row needs two cells: [header, symbol], [symbol, sum|each|orthogonal] or [symbol, one-way|both-ways]", { row: r, column: first === "" ? 0 : 1 }));
+      problems.push(problem("cases-map", "a case map row needs two cells: [header, symbol], [symbol, sum|each|orthogonal|independent] or [symbol, one-way|both-ways]", { row: r, column: first === "" ? 0 : 1 }));
       return;
     }
     const word = second.toLowerCase();
@@ -115,7 +115,7 @@ export function readCaseMap(rows: Cell[][], ruleset: Ruleset): Result<CaseMap> {
     }
     if (!ruleset.symbolByName.has(second)) {
       problems.push(
-        problem("cases-map", `"${second}" is neither a load symbol of ${rulesetName(ruleset)} nor sum, each, orthogonal, one-way or both-ways`, { row: r, column: 1 }),
+        problem("cases-map", `"${second}" is neither a load symbol of ${rulesetName(ruleset)} nor sum, each, orthogonal, independent, one-way or both-ways`, { row: r, column: 1 }),
       );
       return;
     }

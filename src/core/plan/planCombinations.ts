@@ -37,23 +37,30 @@ export function planCombinations(ruleset: Ruleset, parameters: ParameterValues, 
 
   const problems: Problem[] = [];
   const stateCache = new Map<string, SymbolState[]>();
-  const statesOf = (name: string): SymbolState[] => {
-    const cached = stateCache.get(name);
-    if (cached) return cached;
+  const modeOf = (name: string): CaseMode => input.modes?.get(name) ?? (ruleset.symbolByName.get(name) as LoadSymbol).cases;
+  const statesFor = (name: string, cases: number[], mode: CaseMode): SymbolState[] => {
     const symbol = ruleset.symbolByName.get(name) as LoadSymbol;
-    const mode = input.modes?.get(name) ?? symbol.cases;
     const share = typeof symbol.orthogonalShare === "number" ? symbol.orthogonalShare : (parameters.numbers.get(symbol.orthogonalShare) ?? NaN);
     const reversible = input.reversible?.get(name) ?? symbol.reversible;
-    const states = symbolStates(symbol, casesOf.get(name) ?? [], mode, share, reversible);
+    const states = symbolStates(symbol, cases, mode, share, reversible);
     if (!states.ok) throw new StateLimit(states.problems);
-    stateCache.set(name, states.value);
     return states.value;
+  };
+  const symbols: SymbolAccess = {
+    statesOf: (name) => {
+      let states = stateCache.get(name);
+      if (!states) stateCache.set(name, (states = statesFor(name, casesOf.get(name) ?? [], modeOf(name))));
+      return states;
+    },
+    // One case of an "independent" symbol, as a term of its own.
+    statesOfCase: (name, caseIndex) => statesFor(name, [caseIndex], "sum"),
+    independentCases: (name) => (modeOf(name) === "independent" && (casesOf.get(name)?.length ?? 0) > 1 ? (casesOf.get(name) ?? []) : null),
   };
 
   const combinations: PlannedCombination[] = [];
   for (const combination of ruleset.combinations) {
     try {
-      const planned = planOne(combination, ruleset, parameters, statesOf, casesOf, supplied);
+      const planned = planOne(combination, ruleset, parameters, symbols, casesOf, supplied, cases);
       if (!planned.ok) problems.push(...planned.problems);
       else combinations.push(planned.value);
     } catch (e) {
@@ -65,6 +72,14 @@ export function planCombinations(ruleset: Ruleset, parameters: ParameterValues, 
   if (problems.length > 0) return fail(...problems);
   const rowCount = combinations.reduce((n, c) => n + c.rowCount, 0);
   return ok({ ruleset, parameters, cases, casesOf, combinations, rowCount });
+}
+
+/** The ways each symbol can act, computed once per plan. */
+interface SymbolAccess {
+  statesOf: (symbol: string) => SymbolState[];
+  statesOfCase: (symbol: string, caseIndex: number) => SymbolState[];
+  /** The cases to give a term each, for a symbol whose cases take their factor options independently; else null. */
+  independentCases: (symbol: string) => number[] | null;
 }
 
 class StateLimit extends Error {
@@ -79,6 +94,8 @@ interface Context {
   statesOf: (symbol: string) => SymbolState[];
   /** Symbol → the state every occurrence takes in this branch. */
   shared: ReadonlyMap<string, SymbolState>;
+  /** Symbol → the states one split-off term of an "independent" symbol may take. */
+  only?: ReadonlyMap<string, SymbolState[]>;
   /** Does the table have cases of this symbol? (Always, when planning without a table.) */
   hasCases: (symbol: string) => boolean;
   leader: string | null;
@@ -93,10 +110,12 @@ function planOne(
   combination: Combination,
   ruleset: Ruleset,
   parameters: ParameterValues,
-  statesOf: (symbol: string) => SymbolState[],
+  symbols: SymbolAccess,
   casesOf: ReadonlyMap<string, number[]>,
   supplied: boolean,
+  cases: PlanCase[],
 ): Result<PlannedCombination> {
+  const { statesOf } = symbols;
   const { sum, expression } = combination;
   const leadTerm = sum.terms.find((t) => t.body.kind === "lead");
   const leadSymbols = leadTerm?.body.kind === "lead" ? leadTerm.body.symbols.map((s) => s.name) : [];
@@ -158,6 +177,15 @@ function planOne(
           }
           continue;
         }
+        const split = term.body.kind === "symbol" && occurrences.get(term.body.name) === 1 ? symbols.independentCases(term.body.name) : null;
+        if (split && term.body.kind === "symbol") {
+          const name = term.body.name;
+          for (const k of split) {
+            const own: Context = { ...ctx, only: new Map([[name, symbols.statesOfCase(name, k)]]) };
+            terms.push({ text: `${termText(term, expression)} [${cases[k].header}]`, options: termOptions(term, [], own, leadSymbols) });
+          }
+          continue;
+        }
         const leads = term.body.kind === "lead";
         terms.push({ text: leads ? `${leader} (leading)` : termText(term, expression), options: termOptions(term, [], ctx, leadSymbols), leads });
       }
@@ -199,7 +227,7 @@ function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols:
     case "symbol": {
       const symbol = ctx.ruleset.symbolByName.get(body.name) as LoadSymbol;
       const shared = ctx.shared.get(body.name);
-      const states = shared ? [shared] : ctx.statesOf(body.name);
+      const states = shared ? [shared] : (ctx.only?.get(body.name) ?? ctx.statesOf(body.name));
       const factors = stack.map((e) => evaluateFactor(e.factor, e.choice, symbol, ctx.parameters));
       const factor = factors.reduce((a, b) => a * b, 1);
       const why = stack.map((e) => factorText(e.factor, e.choice)).concat(attributeNotes(stack, symbol, ctx));

@@ -4,6 +4,8 @@
  *  - each: one case at a time (each wind direction in turn);
  *  - orthogonal: each case leading at 100 % with every other at the share
  *    (30 %, ASCE/SEI 7-16 §12.5.3), with every sign: n·2^n states;
+ *  - independent: as sum here; the planner gives each case a term of its own
+ *    where the symbol is written once as a term by itself;
  * and, for a reversible symbol under sum or each, every state also reversed
  * (a case map may make a symbol one-way or both ways for one table).
  */
@@ -29,7 +31,9 @@ export function symbolStates(symbol: LoadSymbol, cases: number[], mode: CaseMode
   if (cases.length === 0) return ok([{ parts: [] }]);
   const reversed = (parts: StatePart[]): StatePart[] => parts.map((p) => ({ ...p, sign: -p.sign, why: p.why ? `${p.why} × -1 (reversed)` : "-1 (reversed)" }));
   switch (mode) {
-    case "sum": {
+    case "sum":
+    case "independent": {
+      // "independent" splits a term into one term per case in the planner; where it cannot, the cases act together.
       const parts = cases.map((c) => ({ caseIndex: c, sign: 1, why: "" }));
       return ok(reversible ? [{ parts }, { parts: reversed(parts) }] : [{ parts }]);
     }

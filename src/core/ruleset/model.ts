@@ -2,7 +2,7 @@
 import type { Sum } from "../expression/ast.js";
 import type { RulesetFile } from "./schema.js";
 
-export type CaseMode = "sum" | "each" | "orthogonal";
+export type CaseMode = "sum" | "each" | "orthogonal" | "independent";
 
 export interface LoadSymbol {
   name: string;

@@ -21,9 +21,11 @@ export const symbolSchema = z.strictObject({
   /**
    * How several cases of this symbol in one table combine: "sum" (all act
    * together), "each" (one at a time, in turn), "orthogonal" (each direction
-   * leading at full value with the others at `orthogonalShare`, all signs).
+   * leading at full value with the others at `orthogonalShare`, all signs),
+   * "independent" (all act, each taking its term's factor options on its own:
+   * permanent actions from different sources).
    */
-  cases: z.enum(["sum", "each", "orthogonal"]).optional(),
+  cases: z.enum(["sum", "each", "orthogonal", "independent"]).optional(),
   /** The share of the non-leading directions under "orthogonal": a number or a value name. */
   orthogonalShare: z.union([z.number(), name]).optional(),
   /** May a term of this symbol be left out where that is worse? Default: transient yes, permanent no. */

@@ -149,9 +149,9 @@ describe("readCaseMap", () => {
 
   test("names the cell of a row it cannot read", () => {
     expect(messages(readCaseMap([["Wind", "X"], ["Q", "sum"], ["Wind", null]], ruleset))).toEqual([
-      'cell B1: "X" is neither a load symbol of the typed ruleset nor sum, each, orthogonal, one-way or both-ways',
+      'cell B1: "X" is neither a load symbol of the typed ruleset nor sum, each, orthogonal, independent, one-way or both-ways',
       'cell A2: "Q" is not a load symbol of the typed ruleset (symbols: D, L, Lr, S, R, W, E)',
-      "cell B3: a case map row needs two cells: [header, symbol], [symbol, sum|each|orthogonal] or [symbol, one-way|both-ways]",
+      "cell B3: a case map row needs two cells: [header, symbol], [symbol, sum|each|orthogonal|independent] or [symbol, one-way|both-ways]",
     ]);
   });
 });

@@ -156,6 +156,13 @@ describe("expansion", () => {
     expect(rows).toEqual(["G:self 1.35, G:finishes 1.35", "G:self 1, G:finishes 1"]);
   });
 
+  test("lets cases of a permanent action from different sources take the factor pair each on its own", () => {
+    // EN 1990 A1.3.1(4) [memory]: one factor for all permanent actions from one source; actions from
+    // different sources (here self weight and soil, invented headers) are factored independently.
+    const rows = factorRows(plan(euroRuleset("(1.35 or 1.0)G"), table(["G:self", "G:soil"]), {}, [["G", "independent"]]));
+    expect(rows.sort()).toEqual(["G:self 1.35, G:soil 1.35", "G:self 1.35, G:soil 1", "G:self 1, G:soil 1.35", "G:self 1, G:soil 1"].sort());
+  });
+
   test("gives a symbol written twice the same case and direction in both places", () => {
     const rows = factorRows(plan(typed([["x", "W! + 0.5W", "invented"]]), table(["W:N", "W:E"])));
     expect(rows.sort()).toEqual(["W:E -1.5", "W:E 1.5", "W:N -1.5", "W:N 1.5", "W:E -1", "W:E 1", "W:N -1", "W:N 1"].sort());

@@ -16,6 +16,7 @@ export const SYMBOLS: RulesetFile["symbols"] = {
   W: { description: "transient, reversible, one case at a time", permanence: "transient", reversible: true, attributes: { psi0: 0.6 } },
   E: { description: "transient, directions by the orthogonal rule", permanence: "transient", reversible: true, cases: "orthogonal", orthogonalShare: "q", attributes: { psi0: 0 } },
   T: { description: "transient, cases summed", permanence: "transient", cases: "sum", attributes: { psi0: 0.5 } },
+  P: { description: "permanent, cases from independent sources", permanence: "permanent", cases: "independent" },
 };
 
 const VARIABLE = ["L", "S", "W", "E", "T"];

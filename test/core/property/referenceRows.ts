@@ -19,7 +19,10 @@
  *   only if marked "?";
  * - lead(…) takes each listed symbol that has cases in turn (none: it adds
  *   nothing); "others" stands for one term per non-leading listed symbol;
- * - a combination with a "!" term whose symbols have no cases gives no rows.
+ * - a combination with a "!" term whose symbols have no cases gives no rows;
+ * - an "independent" symbol written once as a term by itself becomes one term
+ *   per case, each taking the term's factor options on its own; elsewhere its
+ *   cases act together as under "sum".
  */
 import type { Arith, Body, Sum, Term } from "../../../src/core/expression/ast.js";
 import type { LoadSymbol, Ruleset } from "../../../src/core/ruleset/model.js";
@@ -31,6 +34,7 @@ interface Ctx {
   numbers: ReadonlyMap<string, number>;
   casesOf: Map<string, number[]>;
   state: Map<string, Vector>; // symbol → its factors on cases for this row
+  only?: Map<string, Vector[]>; // a split-off term's own ways to act
   leader: string | null;
   leadSymbols: string[];
 }
@@ -45,19 +49,29 @@ export function referenceRows(ruleset: Ruleset, numbers: ReadonlyMap<string, num
     const leadTerm = sum.terms.find((t) => t.body.kind === "lead");
     const leadSymbols = leadTerm && leadTerm.body.kind === "lead" ? leadTerm.body.symbols.map((s) => s.name) : [];
     if (sum.terms.some((t) => t.presence === "must" && symbolsIn(t.body, leadSymbols).every((s) => (casesOf.get(s) ?? []).length === 0))) continue;
+    const independent = (s: string) => (modes.get(s) ?? ruleset.symbolByName.get(s)?.cases) === "independent" && (casesOf.get(s) ?? []).length > 1;
     const used = [...new Set(sum.terms.flatMap((t) => symbolsIn(t.body, leadSymbols)))];
     const stateLists = used.map((s) => statesOf(ruleset.symbolByName.get(s) as LoadSymbol, casesOf.get(s) ?? [], modes.get(s), numbers));
     const suppliedLeaders = leadSymbols.filter((s) => (casesOf.get(s) ?? []).length > 0);
     for (const leader of suppliedLeaders.length > 0 ? suppliedLeaders : [null]) {
       for (const assignment of cartesian(stateLists)) {
         const ctx: Ctx = { ruleset, numbers, casesOf, state: new Map(used.map((s, k) => [s, assignment[k]])), leader, leadSymbols };
-        const terms: Term[] = [];
+        const terms: { term: Term; only?: Vector[] }[] = [];
         for (const t of sum.terms) {
           if (t.body.kind === "others") {
-            for (const s of leadSymbols) if (s !== leader) terms.push({ ...t, body: { kind: "symbol", name: s, span: t.body.span } });
-          } else terms.push(t);
+            for (const s of leadSymbols) if (s !== leader) terms.push({ term: { ...t, body: { kind: "symbol", name: s, span: t.body.span } } });
+          } else if (t.body.kind === "symbol" && independent(t.body.name) && occurrences(sum, t.body.name) === 1) {
+            // Each case a term of its own, with that case alone (and reversed, if reversible).
+            const symbol = ruleset.symbolByName.get(t.body.name) as LoadSymbol;
+            for (const c of casesOf.get(t.body.name) ?? []) terms.push({ term: t, only: symbol.reversible ? [new Map([[c, 1]]), new Map([[c, -1]])] : [new Map([[c, 1]])] });
+          } else terms.push({ term: t });
         }
-        for (const row of sumVectors(terms, [], ctx, false)) rows.push(row);
+        let out: Vector[] = [new Map()];
+        for (const { term, only } of terms) {
+          const options = termVectors(term, [], only ? { ...ctx, only: new Map([[(term.body as { name: string }).name, only]]) } : ctx, false);
+          out = out.flatMap((a) => options.map((b) => add(a, b)));
+        }
+        for (const row of out) rows.push(row);
       }
     }
   }
@@ -97,7 +111,8 @@ function bodyVectors(body: Body, factors: { a: Arith; choice: Map<Arith, number>
       const symbol = ctx.ruleset.symbolByName.get(body.name) as LoadSymbol;
       let f = 1;
       for (const { a, choice } of factors) f *= evaluate(a, choice, symbol, ctx.numbers);
-      return [scale(ctx.state.get(body.name) ?? new Map(), f)];
+      const own = ctx.only?.get(body.name);
+      return own ? own.map((v) => scale(v, f)) : [scale(ctx.state.get(body.name) ?? new Map(), f)];
     }
     case "lead":
       return ctx.leader === null ? [new Map()] : bodyVectors({ kind: "symbol", name: ctx.leader, span: body.span }, factors, ctx);
@@ -114,7 +129,7 @@ function statesOf(symbol: LoadSymbol, cases: number[], mode: string | undefined,
   if (cases.length === 0) return [new Map()];
   const m = mode ?? symbol.cases;
   const withReversal = (vs: Vector[]) => (symbol.reversible ? vs.flatMap((v) => [v, scale(v, -1)]) : vs);
-  if (m === "sum") return withReversal([new Map(cases.map((c) => [c, 1]))]);
+  if (m === "sum" || m === "independent") return withReversal([new Map(cases.map((c) => [c, 1]))]);
   if (m === "each") return withReversal(cases.map((c) => new Map([[c, 1]])));
   const share = typeof symbol.orthogonalShare === "number" ? symbol.orthogonalShare : (numbers.get(symbol.orthogonalShare) as number);
   const out: Vector[] = [];
@@ -163,6 +178,17 @@ function choicesOf(a: Arith | null): Map<Arith, number>[] {
   };
   walk(a);
   return cartesian(nodes.map((n) => (n.kind === "choice" ? n.options.map((_, k) => k) : [0]))).map((ks) => new Map(nodes.map((n, i) => [n, ks[i]])));
+}
+
+/** How often a symbol is written in a combination; a lead(…) list counts once, "others" not at all. */
+function occurrences(sum: Sum, name: string): number {
+  let n = 0;
+  for (const t of sum.terms) {
+    if (t.body.kind === "symbol" && t.body.name === name) n++;
+    else if (t.body.kind === "lead" && t.body.symbols.some((s) => s.name === name)) n++;
+    else if (t.body.kind === "group") for (const alt of t.body.alternatives) n += occurrences(alt, name);
+  }
+  return n;
 }
 
 export function symbolsIn(body: Body, leadSymbols: string[]): string[] {
