@@ -1,23 +1,36 @@
 /**
- * The task pane's first page: the cautions, every ruleset a formula can name
- * (shipped and stored) with its verification and approval status and
- * fingerprint, and the combination list of the one selected — exactly what
- * LW.COMBOS returns for it. Later pages (edit, compare, approve) build on the
- * same pieces: the library, the store and the formulas' evaluation.
+ * The task pane: the cautions, always in view, and five views over the
+ * rulesets a formula can name — Library (status, approval, source,
+ * fingerprint, combination list), Editor (drafts kept apart from the stored
+ * copies), Compare, Approve, and Import / export. Views are plain DOM, built
+ * from the shared state each time they are shown.
  */
 import { CAUTIONS } from "../addin/cautions.js";
-import { library, storeLocation, type LibraryEntry } from "../addin/rulesetLibrary.js";
-import { COMBOS } from "../functions/formulas/combosFormula.js";
-import type { OutputCell } from "../functions/formula.js";
-import { evaluateFormula } from "../functions/runFormula.js";
-import { approvalWord, verificationWord } from "../functions/stamp.js";
+import { storeLocation } from "../addin/rulesetLibrary.js";
+import { approveView } from "./approveView.js";
+import { compareView } from "./compareView.js";
+import { el } from "./dom.js";
+import { DraftStore } from "./draftStore.js";
+import { editorView } from "./editorView.js";
+import { libraryView } from "./libraryView.js";
+import { storeFunctions, type PaneContext, type ViewName } from "./paneContext.js";
+import { transferView } from "./transferView.js";
+
+export { MAX_PANE_ROWS } from "./comboList.js";
 
 export interface PaneOptions {
   inExcel: boolean;
+  /** Where drafts are kept; the browser's local storage unless given. */
+  draftStorage?: Storage | null;
 }
 
-/** Rows of a combination list shown at most; the formula gives all of them. */
-export const MAX_PANE_ROWS = 1000;
+const VIEWS: { name: ViewName; label: string; render: (ctx: PaneContext) => HTMLElement }[] = [
+  { name: "library", label: "Library", render: libraryView },
+  { name: "editor", label: "Editor", render: editorView },
+  { name: "compare", label: "Compare", render: compareView },
+  { name: "approve", label: "Approve", render: approveView },
+  { name: "transfer", label: "Import / export", render: transferView },
+];
 
 export function startTaskPane(doc: Document, options: PaneOptions): void {
   const $ = (id: string) => doc.getElementById(id) as HTMLElement;
@@ -26,78 +39,65 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
     : `In a browser (demo, no Excel): stored rulesets live in ${storeLocation()}.`;
   $("lw-cautions").replaceChildren(...CAUTIONS.map((text) => el(doc, "p", {}, text)));
 
-  let selected: string | null = null;
-  const params = $("lw-params") as HTMLInputElement;
+  const storage = options.draftStorage !== undefined ? options.draftStorage : safeLocalStorage(doc);
+  const notice = $("lw-notice");
+  const tabs = $("lw-tabs");
+  const panel = $("lw-view");
+  let current: ViewName = "library";
 
-  const render = () => {
-    const { entries, storeProblem } = library();
-    const problem = $("lw-store-problem");
-    problem.hidden = storeProblem === null;
-    problem.textContent = storeProblem ?? "";
-    if (selected === null || !entries.some((e) => e.id === selected)) selected = entries[0]?.id ?? null;
-    $("lw-rulesets").replaceChildren(rulesetTable(doc, entries, selected, (id) => {
-      selected = id;
-      render();
-    }));
-    $("lw-combos").replaceChildren(...(selected ? comboList(doc, selected, params.value) : [el(doc, "p", {}, "No ruleset is shipped or stored yet.")]));
-  };
-  params.addEventListener("change", render);
-  render();
-}
-
-function rulesetTable(doc: Document, entries: LibraryEntry[], selected: string | null, select: (id: string) => void): HTMLElement {
-  const head = el(doc, "tr", {}, ...["status", "approval", "id", "title", "standard", "source", "fingerprint"].map((h) => el(doc, "th", {}, h)));
-  const rows = entries.map((e) => {
-    const button = el(doc, "button", { class: "ruleset", type: "button" }, e.id);
-    button.addEventListener("click", () => select(e.id));
-    const f = e.ruleset?.file;
-    const status = e.status;
-    return el(
-      doc,
-      "tr",
-      { "data-ruleset-id": e.id, "data-status": status?.verification ?? "invalid", class: e.id === selected ? "selected" : "" },
-      el(doc, "td", { class: `status-${status?.verification ?? "user"}`, title: status?.summary ?? e.problem ?? "" }, status ? verificationWord(status) : "DOES NOT LOAD"),
-      el(doc, "td", { class: `approval-${status?.approval ?? "not-approved"}` }, status ? approvalWord(status) : ""),
-      el(doc, "td", {}, button),
-      el(doc, "td", {}, f?.title ?? e.problem ?? ""),
-      el(doc, "td", {}, f ? `${f.standard.name} ${f.standard.edition}` : ""),
-      el(doc, "td", {}, e.source === "stored" ? "stored" : "shipped"),
-      el(doc, "td", { class: "fingerprint", title: status?.fingerprint ?? "" }, status?.shortFingerprint ?? ""),
-    );
-  });
-  return el(doc, "tbody", {}, head, ...rows);
-}
-
-/** The selected ruleset's combination list, as LW.COMBOS gives it: stamp, header, rows, notes. */
-function comboList(doc: Document, id: string, paramsText: string): HTMLElement[] {
-  const outcome = evaluateFormula(COMBOS, [[[id]], paramsText.trim() === "" ? null : [[paramsText]]]);
-  if (!outcome.ok) return [el(doc, "p", { class: "problem" }, outcome.message)];
-  const [stamp, header, ...rest] = outcome.value;
-  const notes = rest.filter((r) => typeof r[0] === "string" && r[0].startsWith("note:"));
-  const body = rest.filter((r) => !notes.includes(r));
-  const shown = body.slice(0, MAX_PANE_ROWS);
-  const table = el(
+  const ctx: PaneContext = {
     doc,
-    "table",
-    { id: "lw-combo-table" },
-    el(doc, "tr", {}, ...header.map((h) => el(doc, "th", {}, String(h)))),
-    ...shown.map((r) => el(doc, "tr", {}, ...r.map((c) => cell(doc, c)))),
-  );
-  return [
-    el(doc, "p", { class: "stamp", id: "lw-stamp" }, String(stamp[0])),
-    el(doc, "div", { class: "scroll" }, table),
-    ...(body.length > shown.length ? [el(doc, "p", {}, `Showing ${shown.length} of ${body.length} rows; LW.COMBOS lists all of them.`)] : []),
-    ...notes.map((n) => el(doc, "p", {}, String(n[0]))),
-  ];
+    inExcel: options.inExcel,
+    storedWhere: options.inExcel ? "this workbook" : "this browser",
+    drafts: new DraftStore(storage),
+    selected: null,
+    openDraft: null,
+    comparePair: null,
+    ...storeFunctions(),
+    notice: (text, kind = "done") => {
+      notice.textContent = text;
+      notice.className = kind === "problem" ? "notice notice-problem" : "notice";
+      notice.hidden = false;
+    },
+    show: (view) => {
+      const same = view === current;
+      const scroll = same ? (doc.defaultView?.scrollY ?? 0) : 0;
+      if (!same) notice.hidden = true;
+      current = view;
+      renderTabs();
+      panel.setAttribute("aria-labelledby", `lw-tab-${view}`);
+      panel.setAttribute("data-view", view);
+      panel.replaceChildren(VIEWS.find((v) => v.name === view)!.render(ctx));
+      doc.defaultView?.scrollTo({ top: scroll });
+    },
+  };
+
+  const renderTabs = () => {
+    tabs.replaceChildren(
+      ...VIEWS.map((v) => {
+        const selected = v.name === current;
+        const tab = el(doc, "button", { type: "button", role: "tab", id: `lw-tab-${v.name}`, "aria-selected": String(selected), "aria-controls": "lw-view", tabindex: selected ? "0" : "-1" }, v.label);
+        tab.addEventListener("click", () => ctx.show(v.name));
+        return tab;
+      }),
+    );
+  };
+  // Tabs follow the usual keyboard pattern: arrows move between them, Home and End to the ends.
+  tabs.addEventListener("keydown", (e) => {
+    const i = VIEWS.findIndex((v) => v.name === current);
+    const to = e.key === "ArrowRight" ? (i + 1) % VIEWS.length : e.key === "ArrowLeft" ? (i + VIEWS.length - 1) % VIEWS.length : e.key === "Home" ? 0 : e.key === "End" ? VIEWS.length - 1 : -1;
+    if (to < 0) return;
+    e.preventDefault();
+    ctx.show(VIEWS[to].name);
+    doc.getElementById(`lw-tab-${VIEWS[to].name}`)?.focus();
+  });
+  ctx.show("library");
 }
 
-function cell(doc: Document, value: OutputCell): HTMLElement {
-  return typeof value === "number" ? el(doc, "td", { class: "num" }, value === 0 ? "" : String(value)) : el(doc, "td", {}, value);
-}
-
-function el(doc: Document, tag: string, attributes: Record<string, string>, ...children: (string | Node)[]): HTMLElement {
-  const node = doc.createElement(tag);
-  for (const [k, v] of Object.entries(attributes)) if (v !== "") node.setAttribute(k, v);
-  node.append(...children);
-  return node;
+function safeLocalStorage(doc: Document): Storage | null {
+  try {
+    return doc.defaultView?.localStorage ?? null;
+  } catch {
+    return null;
+  }
 }

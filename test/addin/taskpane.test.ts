@@ -11,7 +11,7 @@ beforeAll(async () => {
   server = await serveDirectory(await builtAddin());
   browser = await openBrowser();
   await browser.page.goto(`${server.origin}/taskpane.html`);
-  await browser.page.waitForSelector("#lw-rulesets tr[data-ruleset-id]");
+  await browser.page.waitForSelector("#lw-rulesets li[data-ruleset-id]");
 });
 
 afterAll(async () => {
@@ -19,7 +19,7 @@ afterAll(async () => {
   await server?.close();
 });
 
-const statusOf = (id: string) => browser.page.locator(`#lw-rulesets tr[data-ruleset-id="${id}"] td`).first().textContent();
+const statusOf = (id: string) => browser.page.locator(`#lw-rulesets li[data-ruleset-id="${id}"] [data-verification]`).textContent();
 
 describe("the task pane in a plain browser", () => {
   test("shows the cautions", async () => {
@@ -39,19 +39,19 @@ describe("the task pane in a plain browser", () => {
   test("lists every shipped ruleset, UNVERIFIED exactly where its provenance has a source from memory", async () => {
     for (const { ruleset } of shippedRulesets()) {
       const fromMemory = ruleset.file.provenance.some((p) => p.status === "from-memory");
-      expect(await statusOf(ruleset.file.id), ruleset.file.id).toBe(fromMemory ? "UNVERIFIED" : "Checked");
+      expect(await statusOf(ruleset.file.id), ruleset.file.id).toBe(fromMemory ? "⚠ UNVERIFIED" : "Checked");
     }
   });
 
   test("puts the invented demo ruleset in browser storage, marked UNVERIFIED", async () => {
-    expect(await statusOf("demo-invented")).toBe("UNVERIFIED");
+    expect(await statusOf("demo-invented")).toBe("⚠ UNVERIFIED");
     const stored = await browser.page.evaluate(() => window.localStorage.getItem("loadwright.rulesets"));
     expect(JSON.parse(stored ?? "{}").rulesets.map((r: { id: string }) => r.id)).toEqual(["demo-invented"]);
   });
 
   test("shows the combination list of the selected ruleset with its stamp", async () => {
     await browser.page.locator('button.ruleset:text-is("demo-invented")').click();
-    await browser.page.waitForSelector('#lw-rulesets tr.selected[data-ruleset-id="demo-invented"]');
+    await browser.page.waitForSelector('#lw-rulesets li.selected[data-ruleset-id="demo-invented"]');
     expect(await browser.page.locator("#lw-stamp").textContent()).toMatch(/^UNVERIFIED · not approved · demo-invented 0\.1\.0/);
     const header = await browser.page.locator("#lw-combo-table tr").first().locator("th").allTextContents();
     expect(header).toEqual(["combination row", "clause", "D", "L", "S", "W"]);
@@ -67,8 +67,8 @@ describe("the task pane in a plain browser", () => {
 
   test("does not add the demo again on the next visit", async () => {
     await browser.page.reload();
-    await browser.page.waitForSelector("#lw-rulesets tr[data-ruleset-id]");
-    expect(await browser.page.locator('#lw-rulesets tr[data-ruleset-id="demo-invented"]').count()).toBe(1);
+    await browser.page.waitForSelector("#lw-rulesets li[data-ruleset-id]");
+    expect(await browser.page.locator('#lw-rulesets li[data-ruleset-id="demo-invented"]').count()).toBe(1);
   });
 
   test("writes nothing to the console", () => {

@@ -1,0 +1,58 @@
+/** Reading and writing a draft's parsed JSON by path, tolerating any shape the user's text may have. */
+
+export type Path = (string | number)[];
+export type JsonObject = Record<string, unknown>;
+
+export function isObject(v: unknown): v is JsonObject {
+  return v !== null && typeof v === "object" && !Array.isArray(v);
+}
+
+export function getAt(data: unknown, path: Path): unknown {
+  let v = data;
+  for (const key of path) {
+    if (v === null || typeof v !== "object") return undefined;
+    v = (v as Record<string | number, unknown>)[key];
+  }
+  return v;
+}
+
+/** Sets a value, making objects on the way; `undefined` removes the field. */
+export function setAt(data: JsonObject, path: Path, value: unknown): void {
+  let v: Record<string | number, unknown> = data;
+  for (const key of path.slice(0, -1)) {
+    const next = v[key];
+    if (next === null || typeof next !== "object") v[key] = {};
+    v = v[key] as Record<string | number, unknown>;
+  }
+  const last = path[path.length - 1];
+  if (value === undefined) {
+    if (Array.isArray(v) && typeof last === "number") v[last] = undefined;
+    else delete v[last];
+  } else {
+    v[last] = value;
+  }
+}
+
+/** Renames a field of an object in place, keeping the order of its fields. */
+export function renameKey(object: JsonObject, from: string, to: string): void {
+  const entries = Object.entries(object);
+  for (const [k] of entries) delete object[k];
+  for (const [k, v] of entries) object[k === from ? to : k] = v;
+}
+
+/** The text a field shows for a value of any type. */
+export function shownText(v: unknown): string {
+  if (v === undefined || v === null) return "";
+  if (typeof v === "string") return v;
+  if (typeof v === "number" || typeof v === "boolean") return String(v);
+  return JSON.stringify(v);
+}
+
+const DECIMAL = /^[+-]?(\d+(\.\d*)?|\.\d+)$/;
+
+/** A number typed with a decimal point becomes a number; anything else stays text, which the schema then refuses beside the field. */
+export function numberOrText(text: string): number | string | undefined {
+  const t = text.trim();
+  if (t === "") return undefined;
+  return DECIMAL.test(t) ? Number(t) : t;
+}

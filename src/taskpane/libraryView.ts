@@ -1,0 +1,221 @@
+/**
+ * Library: every ruleset a formula can name, stored first, then shipped, each
+ * with its verification (UNVERIFIED in words), approval, source and
+ * fingerprint; the selected one's details, what to do with it, and its
+ * combination list as LW.COMBOS gives it.
+ */
+import type { LibraryEntry } from "../addin/rulesetLibrary.js";
+import { comboListOf } from "./comboList.js";
+import { button, el, uniqueId } from "./dom.js";
+import { exportButtons } from "./exportRuleset.js";
+import { draftOfCopy, draftOfStored, newIdProblem } from "./openDraft.js";
+import type { PaneContext } from "./paneContext.js";
+import { approvalBadge, fromMemoryList, sourceLine, verificationBadge } from "./statusText.js";
+import { takenIds } from "./takenIds.js";
+
+export function libraryView(ctx: PaneContext): HTMLElement {
+  const { doc } = ctx;
+  const { entries, storeProblem } = ctx.library();
+  if (ctx.selected === null || !entries.some((e) => e.id === ctx.selected)) ctx.selected = entries[0]?.id ?? null;
+  const root = el(doc, "div", { id: "lw-library" });
+  if (storeProblem) root.append(el(doc, "p", { id: "lw-store-problem", class: "problem", role: "alert" }, storeProblem));
+  const drafts = ctx.drafts.list();
+  if (drafts.length > 0) {
+    root.append(
+      el(
+        doc,
+        "p",
+        { class: "drafts-line" },
+        `${drafts.length === 1 ? "One draft is" : `${drafts.length} drafts are`} open and not stored: `,
+        button(doc, "show in the editor", () => ctx.show("editor"), { class: "link" }),
+      ),
+    );
+  }
+  const list = el(doc, "ul", { id: "lw-rulesets", class: "ruleset-list", "aria-label": "Rulesets" });
+  for (const entry of entries) list.append(entryItem(ctx, entry));
+  root.append(list);
+  const chosen = entries.find((e) => e.id === ctx.selected);
+  root.append(chosen ? details(ctx, chosen) : el(doc, "p", {}, "No ruleset is shipped or stored yet."));
+  return root;
+}
+
+function entryItem(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
+  const { doc } = ctx;
+  const f = entry.ruleset?.file;
+  const selected = entry.id === ctx.selected;
+  const pick = button(
+    doc,
+    entry.id,
+    () => {
+      ctx.selected = entry.id;
+      ctx.show("library");
+      doc.querySelector<HTMLElement>(`#lw-rulesets li[data-ruleset-id="${entry.id}"] button.ruleset`)?.focus();
+    },
+    { class: "ruleset", "aria-pressed": selected ? "true" : "false" },
+  );
+  return el(
+    doc,
+    "li",
+    { "data-ruleset-id": entry.id, "data-source": entry.source, "data-status": entry.status?.verification ?? "invalid", class: selected ? "selected" : "" },
+    el(doc, "div", { class: "entry-line" }, verificationBadge(doc, entry.status), " ", pick, f ? el(doc, "span", { class: "muted" }, ` ${f.version}`) : null),
+    el(doc, "div", { class: "entry-title" }, f?.title ?? entry.problem ?? ""),
+    el(
+      doc,
+      "div",
+      { class: "entry-meta" },
+      f && entry.status ? approvalBadge(doc, f, entry.status) : null,
+      el(doc, "span", { class: "entry-source" }, sourceLine(entry, ctx.storedWhere)),
+      entry.status ? el(doc, "span", { class: "fingerprint", title: entry.status.fingerprint }, entry.status.shortFingerprint) : null,
+    ),
+  );
+}
+
+function details(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
+  const { doc } = ctx;
+  const root = el(doc, "section", { id: "lw-selected", "aria-labelledby": "lw-selected-title" });
+  root.append(el(doc, "h2", { id: "lw-selected-title" }, entry.id));
+  const f = entry.ruleset?.file;
+  const status = entry.status;
+  if (!f || !status) {
+    root.append(el(doc, "p", { class: "problem" }, `This stored ruleset no longer loads: ${entry.problem ?? "unknown problem"}. It is kept as it was; export it or edit it as text to mend it.`));
+    if (entry.source === "stored") root.append(removeControl(ctx, entry));
+    return root;
+  }
+  root.append(
+    el(doc, "p", { class: "entry-title" }, f.title),
+    el(doc, "p", {}, `${f.standard.name} ${f.standard.edition}${f.standard.clauses ? ` — ${f.standard.clauses}` : ""}`, f.basis ? ` · ${f.basis}` : "", ` · version ${f.version}`),
+    el(doc, "p", { class: "badges" }, verificationBadge(doc, status), " ", approvalBadge(doc, f, status)),
+    el(doc, "p", { id: "lw-selected-summary" }, status.summary),
+  );
+  if (status.verification === "unverified") {
+    root.append(el(doc, "div", { class: "alarm-box" }, el(doc, "p", {}, "From memory — verify against the standard before use:"), fromMemoryList(doc, f)));
+  }
+  if (f.approval.note) root.append(el(doc, "p", {}, `Approval note: ${f.approval.note}`));
+  root.append(
+    el(doc, "p", {}, "Fingerprint ", el(doc, "span", { class: "fingerprint", id: "lw-selected-fingerprint" }, status.fingerprint)),
+    el(doc, "p", {}, sourceLine(entry, ctx.storedWhere)),
+  );
+  for (const note of f.notes ?? []) root.append(el(doc, "p", { class: "note" }, note));
+
+  const actions = el(doc, "div", { class: "actions" });
+  if (entry.source === "stored") {
+    actions.append(
+      button(doc, "Edit as a draft", () => {
+        const existing = ctx.drafts.list().find((d) => d.base.kind === "stored" && d.base.id === entry.id);
+        const draft = existing ?? draftOfStored(entry);
+        if (!existing) ctx.drafts.put(draft);
+        ctx.openDraft = draft.key;
+        ctx.show("editor");
+      }),
+    );
+  }
+  const copyForm = copyControl(ctx, entry);
+  actions.append(
+    button(doc, "Open a copy…", () => {
+      copyForm.hidden = false;
+      copyForm.querySelector("input")?.focus();
+    }),
+    button(doc, "Approve…", () => ctx.show("approve")),
+    button(doc, "Compare…", () => {
+      const mine = entry.source === "stored" ? `stored:${entry.id}` : `shipped:${entry.id}`;
+      ctx.comparePair = { before: entry.shippedFingerprint ? `shipped:${entry.id}` : mine, after: mine };
+      ctx.show("compare");
+    }),
+    ...exportButtons(ctx, f),
+  );
+  root.append(actions, copyForm);
+  if (entry.source === "stored") root.append(removeControl(ctx, entry));
+
+  const paramsId = uniqueId("lw-params");
+  const params = el(doc, "input", { id: "lw-params", type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": paramsId }) as HTMLInputElement;
+  const combos = el(doc, "div", { id: "lw-combos" });
+  const renderCombos = () => combos.replaceChildren(...comboListOf(doc, entry.id, params.value));
+  params.addEventListener("change", renderCombos);
+  root.append(
+    el(doc, "h3", {}, "Combination list"),
+    el(doc, "label", { for: "lw-params" }, "Parameters"),
+    params,
+    el(doc, "p", { id: paramsId, class: "hint" }, "e.g. SDS=1.2; rho=1.3 — empty: the ruleset's defaults. Press Enter to apply."),
+    combos,
+  );
+  renderCombos();
+  return root;
+}
+
+/** "Open a copy…": the id the copy will have, chosen by the user and checked before the draft opens. */
+function copyControl(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
+  const { doc } = ctx;
+  const inputId = uniqueId("lw-copy-id");
+  const problemId = uniqueId("lw-copy-problem");
+  const input = el(doc, "input", { id: inputId, type: "text", autocomplete: "off", spellcheck: "false", value: `${entry.id}-firm`, "aria-describedby": problemId }) as HTMLInputElement;
+  const problem = el(doc, "p", { id: problemId, class: "field-problem", role: "alert" });
+  const open = () => {
+    const id = input.value.trim();
+    const why = newIdProblem(id, takenIds(ctx));
+    if (why) {
+      problem.textContent = why;
+      input.setAttribute("aria-invalid", "true");
+      input.focus();
+      return;
+    }
+    const draft = draftOfCopy(entry, id);
+    ctx.drafts.put(draft);
+    ctx.openDraft = draft.key;
+    ctx.show("editor");
+  };
+  input.addEventListener("keydown", (e) => {
+    if (e.key === "Enter") open();
+  });
+  const form = el(
+    doc,
+    "div",
+    { class: "inline-form", id: "lw-copy-form" },
+    el(doc, "label", { for: inputId }, `Id of the copy of ${entry.id} (lower-case letters, digits, '.', '_', '-')`),
+    input,
+    problem,
+    button(doc, "Open the copy as a draft", open, { id: "lw-copy-open" }),
+  );
+  form.hidden = true;
+  return form;
+}
+
+/** Removing a stored ruleset takes a second, explicit click that says what follows. */
+function removeControl(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
+  const { doc } = ctx;
+  const box = el(doc, "div", { class: "inline-form" });
+  const consequence = entry.shippedFingerprint
+    ? `Formulas naming "${entry.id}" will use the shipped ruleset again.`
+    : `Formulas naming "${entry.id}" will show an error until it is stored again.`;
+  const confirm = button(
+    doc,
+    `Yes, remove ${entry.id} from ${ctx.storedWhere}`,
+    () => {
+      void ctx
+        .store()
+        .remove(entry.id)
+        .then((result) => {
+          if (result.ok) {
+            ctx.notice(`Removed ${entry.id} from ${ctx.storedWhere}. ${consequence}`, "done");
+            ctx.selected = null;
+          } else {
+            ctx.notice(result.problems.map((p) => p.message).join("; "), "problem");
+          }
+          ctx.show("library");
+        });
+    },
+    { class: "danger" },
+  );
+  const explain = el(doc, "p", { class: "hint" }, `${consequence} Export it first if you may need it again.`);
+  confirm.hidden = true;
+  explain.hidden = true;
+  box.append(
+    button(doc, "Remove from store…", () => {
+      confirm.hidden = false;
+      explain.hidden = false;
+      confirm.focus();
+    }),
+    explain,
+    confirm,
+  );
+  return box;
+}
