@@ -102,7 +102,7 @@ export function formatPath(path: (string | number)[]): string {
 
 export interface DescribeOptions {
   /** Turns a 0-based matrix row/column into the user's own reference (A1 address, file line). */
-  cell?: (row: number, column: number) => string;
+  cell?: (row: number, column: number, place: Place) => string;
 }
 
 /** The place, in words, as a prefix: `combination "3", character 14`. */
@@ -114,7 +114,7 @@ export function describePlace(place: Place, options: DescribeOptions = {}): stri
   if (place.row !== undefined && place.column !== undefined) {
     parts.push(
       options.cell
-        ? options.cell(place.row, place.column)
+        ? options.cell(place.row, place.column, place)
         : `cell ${columnLetters(place.column)}${place.row + 1}`,
     );
   } else if (place.row !== undefined) {

@@ -46,7 +46,8 @@ export function readCaseTable(matrix: Cell[][], ruleset: Ruleset, options: CaseT
   if (rows.length < 2 || width < 2) {
     return fail(problem("cases-empty", "the case table needs a header row, a header column and at least one value"));
   }
-  const raggedAt = rows.findIndex((r) => r.length !== width);
+  // A blank row (a CSV's empty line) is skipped later, whatever its width.
+  const raggedAt = rows.findIndex((r) => r.length !== width && !r.every(isBlank));
   if (raggedAt >= 0) {
     return fail(problem("cases-ragged", `it has ${rows[raggedAt].length} cells where the header row has ${width}`, { row: raggedAt }));
   }
@@ -119,10 +120,15 @@ function readCasesAsColumns(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idCo
   const cases = headers.value;
   const components: string[] = [];
   const values: Float64Array[] = [];
+  const firstRowOf = new Map<string, number>();
   for (let r = 1; r < rows.length; r++) {
     const cells = rows[r];
     if (cells.every(isBlank)) continue;
     const id = cells.slice(0, idColumns).map(cellText).filter((t) => t !== "").join(" / ") || `row ${r + 1}`;
+    // A criterion or an explanation names a result by its id: two rows with one id would be ambiguous.
+    const first = firstRowOf.get(id);
+    if (first !== undefined) problems.push(problem("cases-duplicate-header", `result "${id}" appears twice`, { row: r, column: 0, header: id, also: { row: first, column: 0 } }));
+    else firstRowOf.set(id, r);
     const vector = new Float64Array(cases.length);
     for (let k = 0; k < cases.length; k++) {
       vector[k] = readValue(cells[k + idColumns], { row: r, column: k + idColumns }, `${id} / ${cases[k].header}`, options, problems);

@@ -90,8 +90,8 @@ export function explain(plan: Plan, table: CaseTable, row: string | number, comp
     `combination ${combination.id} (${combination.clause}): ${combination.expression}`,
     lines.length === 0
       ? `${name} = 0 (no case is loaded in this row)`
-      : `${name} = ${lines.map((l) => `${f(l.factor)} × ${f(l.caseValue)} [${l.case}]`).join(" + ")}`,
-    ...(lines.length > 0 ? [`  = ${lines.map((l) => f(l.product)).join(" + ")}`, `  = ${f(total)}`] : []),
+      : `${name} = ${signedSum(lines.map((l) => ({ value: l.factor, text: `${f(Math.abs(l.factor))} × ${l.caseValue < 0 ? `(${f(l.caseValue)})` : f(l.caseValue)} [${l.case}]` })))}`,
+    ...(lines.length > 0 ? [`  = ${signedSum(lines.map((l) => ({ value: l.product, text: f(Math.abs(l.product)) })))}`, `  = ${f(total)}`] : []),
     ...lines.map((l) => `factor ${f(l.factor)} on ${l.case} = ${l.why}`),
     ...(parameters.length > 0
       ? [`parameters: ${parameters.map((p) => `${p.name} = ${typeof p.value === "number" ? f(p.value) : p.value} (${p.given ? "given" : "default"})`).join(", ")}`]
@@ -108,4 +108,9 @@ function parametersRead(plan: Plan, sum: Sum): Parameter[] {
     if (typeof symbol.orthogonalShare === "string") names.add(symbol.orthogonalShare);
   }
   return plan.ruleset.parameters.filter((p) => names.has(p.name) || (p.kind === "choice" && p.valueNames.some((v) => names.has(v))));
+}
+
+/** Terms joined as a checker writes them: "23.4 - 28", not "23.4 + -28"; a leading minus kept. */
+function signedSum(terms: { value: number; text: string }[]): string {
+  return terms.map((t, k) => (k === 0 ? (t.value < 0 ? `-${t.text}` : t.text) : `${t.value < 0 ? " - " : " + "}${t.text}`)).join("");
 }

@@ -124,6 +124,15 @@ describe("readCaseTable", () => {
     expect(readCaseTable([["", "D"], ["L", 1]], ruleset, { orientation: "columns" }).ok).toBe(true);
   });
 
+  test("skips a blank row of any width, as a CSV's empty line gives it", () => {
+    const r = readCaseTable([["case", "P"], ["D", 140], [""], ["L", 420]], ruleset);
+    expect(r.ok && [...r.value.values[0]]).toEqual([140, 420]);
+  });
+
+  test("names both rows of a result id that appears twice in a cases-as-columns table", () => {
+    expect(messages(readCaseTable([["result", "D", "L"], ["C1", 1, 2], ["C2", 1, 2], ["C1", 3, 4]], ruleset))).toEqual(['cell A4: result "C1" appears twice (also at A2)']);
+  });
+
   test("refuses ragged rows and a table without values", () => {
     expect(messages(readCaseTable([["", "P", "V"], ["D", 1]], ruleset))).toEqual(["row 2: it has 2 cells where the header row has 3"]);
     expect(messages(readCaseTable([["", "P"]], ruleset))).toEqual(["the case table needs a header row, a header column and at least one value"]);

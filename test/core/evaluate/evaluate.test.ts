@@ -194,6 +194,14 @@ describe("explain", () => {
     ]);
   });
 
+  test("writes negative products as a checker does: subtracted, a negative case value in brackets", () => {
+    // Row 5: 0.9D - W:N on V: 0.9 × 2 - 1 × 10 = 1.8 - 10 = -8.2 (by hand, table above).
+    const e = value(explain(COLUMN.plan, COLUMN.table, "5: 0.9D - W:N", "V"));
+    expect(e.text.slice(2, 5)).toEqual(["V = 0.9 × 2 [D] - 1 × 10 [W:N]", "  = 1.8 - 10", "  = -8.2"]);
+    const p = value(explain(COLUMN.plan, COLUMN.table, "5: 0.9D + W:N", "P"));
+    expect(p.text[2]).toBe("P = 0.9 × 140 [D] + 1 × (-50) [W:N]");
+  });
+
   test("finds a row by its label with typographic signs, or by its number", () => {
     const byLabel = value(findRow(COLUMN.plan, "5: 0.9D \u2212 W:N"));
     expect(rowLabel(COLUMN.plan, byLabel)).toBe("5: 0.9D - W:N");
