@@ -26,6 +26,7 @@ export const VALIDATE_AFTER_MS = 250;
 
 type Mode = "form" | "text";
 const modes = new Map<string, Mode>();
+const openSectionsByDraft = new Map<string, Set<string>>();
 
 export function editorView(ctx: PaneContext): HTMLElement {
   const { doc } = ctx;
@@ -150,10 +151,13 @@ function draftEditor(ctx: PaneContext, draft: Draft): HTMLElement {
     status.setAttribute("data-state", "checking");
     timer = view.setTimeout(validate, VALIDATE_AFTER_MS);
   };
+  const openSections = openSectionsByDraft.get(draft.key) ?? new Set(["identity", "combinations"]);
+  openSectionsByDraft.set(draft.key, openSections);
   const fc: FormContext = {
     doc,
     data: {},
     localProblems,
+    openSections,
     changed: () => {
       text = `${JSON.stringify(fc.data, null, 2)}\n`;
       keep();
@@ -164,7 +168,7 @@ function draftEditor(ctx: PaneContext, draft: Draft): HTMLElement {
       keep();
       renderBody();
       validate();
-      if (focus) body.querySelector<HTMLElement>(focus)?.focus();
+      if (focus) focusOrNear(body.querySelector<HTMLElement>(focus));
     },
   };
 
@@ -307,6 +311,15 @@ function draftEditor(ctx: PaneContext, draft: Draft): HTMLElement {
   renderBody();
   validate();
   return root;
+}
+
+/** Focus an element; a disabled button hands the focus to the next enabled one beside it. */
+function focusOrNear(target: HTMLElement | null): void {
+  if (target instanceof HTMLButtonElement && target.disabled) {
+    target.parentElement?.querySelector<HTMLButtonElement>("button:not(:disabled)")?.focus();
+    return;
+  }
+  target?.focus();
 }
 
 function selectSpot(area: HTMLTextAreaElement, spot: TextSpot): void {

@@ -17,6 +17,8 @@ export interface FormContext {
   rebuild(focus?: string): void;
   /** What the form itself refuses, by field path (a name already taken, a list it cannot read). */
   localProblems: Map<string, string>;
+  /** The sections unfolded, kept across rebuilds. */
+  openSections: Set<string>;
 }
 
 export interface Option {
@@ -90,7 +92,7 @@ export function selectField(fc: FormContext, spec: FieldSpec & { options: Option
   const currentText = current === undefined ? "" : shownText(current);
   const options = [...spec.options];
   if (!options.some((o) => o.value === currentText)) options.push({ value: currentText, label: `${currentText} (not a value of the format)` });
-  const control = el(doc, "select", {}, ...options.map((o) => el(doc, "option", { value: o.value }, o.label))) as HTMLSelectElement;
+  const control = el(doc, "select", {}, ...options.map((o) => optionOf(doc, o))) as HTMLSelectElement;
   control.value = currentText;
   control.addEventListener("change", () => {
     const v = control.value;
@@ -98,6 +100,13 @@ export function selectField(fc: FormContext, spec: FieldSpec & { options: Option
     fc.changed();
   });
   return fieldShell(fc, spec, control);
+}
+
+/** An option whose value is set even when empty (an empty attribute would make its label the value). */
+export function optionOf(doc: Document, o: Option): HTMLOptionElement {
+  const option = el(doc, "option", {}, o.label) as HTMLOptionElement;
+  option.value = o.value;
+  return option;
 }
 
 /**

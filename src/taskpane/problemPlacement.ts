@@ -41,6 +41,13 @@ export function placeProblems(root: HTMLElement, problems: readonly EditorProble
     slot.append(el(doc, "p", { class: "problem" }, message));
     mark(slot);
   }
+  // A folded section with a problem in it unfolds, and every section says how many it holds.
+  for (const section of root.querySelectorAll<HTMLDetailsElement>("details.form-section")) {
+    const count = section.querySelectorAll(".field-problem .problem").length;
+    const badge = section.querySelector(".section-problems");
+    if (badge) badge.textContent = count === 0 ? "" : ` — ${count} ${count === 1 ? "problem" : "problems"}`;
+    if (count > 0) section.open = true;
+  }
 }
 
 /** The expression with the named character marked: `1.2D + 1.6L + 0.5(Lr or S or ⟦R⟧x)`. */

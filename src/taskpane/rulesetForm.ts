@@ -8,7 +8,7 @@
 import { formatPath } from "../core/index.js";
 import { isObject, renameKey, shownText, type JsonObject } from "./dataPath.js";
 import { button, el } from "./dom.js";
-import { entryButton, fieldShell, numberField, parsedField, selectField, textField, type FormContext } from "./formFields.js";
+import { entryButton, fieldShell, numberField, optionOf, parsedField, selectField, textField, type FormContext } from "./formFields.js";
 
 /** The file format's rule for symbol, parameter and value names (README, "Rulesets"). */
 const NAME_PATTERN = /^[\p{L}_][\p{L}\p{N}_]*$/u;
@@ -30,20 +30,29 @@ export function rulesetForm(fc: FormContext): HTMLElement {
   );
 }
 
-function section(doc: Document, title: string, path: string, ...children: (HTMLElement | null)[]): HTMLElement {
-  return el(
+/** A section the user can fold away; it opens by itself when a problem is placed in it. */
+function section(fc: FormContext, key: string, title: string, path: string, ...children: (HTMLElement | null)[]): HTMLElement {
+  const { doc } = fc;
+  const details = el(
     doc,
-    "fieldset",
-    { class: "form-section", "data-path": path },
-    el(doc, "legend", {}, title),
+    "details",
+    { class: "form-section", "data-section": key, "data-path": path },
+    el(doc, "summary", {}, title, el(doc, "span", { class: "section-problems" })),
     el(doc, "div", { class: "field-problem", "data-problem-for": path }),
     ...children,
-  );
+  ) as HTMLDetailsElement;
+  details.open = fc.openSections.has(key);
+  details.addEventListener("toggle", () => {
+    if (details.open) fc.openSections.add(key);
+    else fc.openSections.delete(key);
+  });
+  return details;
 }
 
 function identitySection(fc: FormContext): HTMLElement {
   return section(
-    fc.doc,
+    fc,
+    "identity",
     "Identity",
     "standard",
     textField(fc, { label: "Id (what a formula names)", path: ["id"], mono: true, hint: "lower-case letters, digits, '.', '_' or '-'" }),
@@ -63,7 +72,7 @@ function notAList(doc: Document, what: string): HTMLElement {
 function combinationsSection(fc: FormContext): HTMLElement {
   const { doc, data } = fc;
   const list = data.combinations;
-  if (!Array.isArray(list)) return section(doc, "Combinations", "combinations", notAList(doc, "combinations"));
+  if (!Array.isArray(list)) return section(fc, "combinations", "Combinations", "combinations", notAList(doc, "combinations"));
   const items = list.map((c, i) => {
     const where = `combination ${i + 1}${isObject(c) && typeof c.id === "string" && c.id !== "" ? ` (${c.id})` : ""}`;
     const move = (to: number, direction: string) => () => {
@@ -113,7 +122,7 @@ function combinationsSection(fc: FormContext): HTMLElement {
     list.push({ id: String(n), expression: "", clause: "" });
     fc.rebuild(`[data-path="combinations[${list.length - 1}]"] [data-control-for="combinations[${list.length - 1}].expression"]`);
   });
-  return section(doc, `Combinations (${list.length})`, "combinations", el(doc, "ol", { class: "entries", id: "lw-form-combinations" }, ...items), add);
+  return section(fc, "combinations", `Combinations (${list.length})`, "combinations", el(doc, "ol", { class: "entries", id: "lw-form-combinations" }, ...items), add);
 }
 
 function marked(b: HTMLButtonElement, move: string): HTMLButtonElement {
@@ -196,7 +205,7 @@ const OPTIONAL_BOOLEAN = (absent: string) => [
 function symbolsSection(fc: FormContext): HTMLElement {
   const { doc, data } = fc;
   const symbols = data.symbols;
-  if (!isObject(symbols)) return section(doc, "Load symbols", "symbols", notAList(doc, "symbols"));
+  if (!isObject(symbols)) return section(fc, "symbols", "Load symbols", "symbols", notAList(doc, "symbols"));
   const items = Object.entries(symbols).map(([name, s]) => {
     const p = (field: string) => ["symbols", name, field];
     return el(
@@ -232,7 +241,8 @@ function symbolsSection(fc: FormContext): HTMLElement {
     );
   });
   return section(
-    doc,
+    fc,
+    "symbols",
     `Load symbols (${items.length})`,
     "symbols",
     el(doc, "ul", { class: "entries" }, ...items),
@@ -284,7 +294,7 @@ function attributesField(fc: FormContext, symbol: JsonObject, name: string): HTM
 
 function parametersSection(fc: FormContext): HTMLElement {
   const { doc, data } = fc;
-  if (data.parameters !== undefined && !isObject(data.parameters)) return section(doc, "Parameters", "parameters", notAList(doc, "parameters"));
+  if (data.parameters !== undefined && !isObject(data.parameters)) return section(fc, "parameters", "Parameters", "parameters", notAList(doc, "parameters"));
   const parameters: JsonObject = isObject(data.parameters) ? data.parameters : {};
   const items = Object.entries(parameters).map(([name, p]) => {
     const path = (field: string) => ["parameters", name, field];
@@ -320,7 +330,8 @@ function parametersSection(fc: FormContext): HTMLElement {
     );
   });
   return section(
-    doc,
+    fc,
+    "parameters",
     `Parameters (${items.length})`,
     "parameters",
     el(doc, "ul", { class: "entries" }, ...items),
@@ -341,9 +352,9 @@ function kindField(fc: FormContext, parameters: JsonObject, name: string, p: Jso
     doc,
     "select",
     {},
-    ...(kinds.includes(current) ? [] : [el(doc, "option", { value: current }, `${current} (not a kind of the format)`)]),
-    el(doc, "option", { value: "number" }, "number"),
-    el(doc, "option", { value: "choice" }, "choice (a named set of values, such as a category)"),
+    ...(kinds.includes(current) ? [] : [optionOf(doc, { value: current, label: `${current || "(none)"} (not a kind of the format)` })]),
+    optionOf(doc, { value: "number", label: "number" }),
+    optionOf(doc, { value: "choice", label: "choice (a named set of values, such as a category)" }),
   ) as HTMLSelectElement;
   control.value = current;
   control.addEventListener("change", () => {
@@ -403,7 +414,7 @@ function choicesField(fc: FormContext, p: JsonObject, name: string): HTMLElement
 
 function notesSection(fc: FormContext): HTMLElement {
   const { doc, data } = fc;
-  if (data.notes !== undefined && !Array.isArray(data.notes)) return section(doc, "Notes", "notes", notAList(doc, "notes"));
+  if (data.notes !== undefined && !Array.isArray(data.notes)) return section(fc, "notes", "Notes", "notes", notAList(doc, "notes"));
   const notes: unknown[] = Array.isArray(data.notes) ? data.notes : [];
   const items = notes.map((_, i) =>
     el(
@@ -418,7 +429,8 @@ function notesSection(fc: FormContext): HTMLElement {
     ),
   );
   return section(
-    doc,
+    fc,
+    "notes",
     `Notes (${notes.length})`,
     "notes",
     el(doc, "ol", { class: "entries" }, ...items),
@@ -433,7 +445,7 @@ function notesSection(fc: FormContext): HTMLElement {
 function provenanceSection(fc: FormContext): HTMLElement {
   const { doc, data } = fc;
   const list = data.provenance;
-  if (!Array.isArray(list)) return section(doc, "Provenance", "provenance", notAList(doc, "provenance"));
+  if (!Array.isArray(list)) return section(fc, "provenance", "Provenance", "provenance", notAList(doc, "provenance"));
   const items = list.map((_, i) => {
     const path = (field: string) => ["provenance", i, field];
     return el(
@@ -464,7 +476,8 @@ function provenanceSection(fc: FormContext): HTMLElement {
     );
   });
   return section(
-    doc,
+    fc,
+    "provenance",
     `Provenance (${list.length})`,
     "provenance",
     el(doc, "p", { class: "hint" }, "Any source marked from memory shows the ruleset as UNVERIFIED wherever it is used."),
@@ -482,5 +495,5 @@ function approvalSection(fc: FormContext): HTMLElement {
   const text = a.fingerprint
     ? `Recorded: approved by ${shownText(a.approvedBy) || "(no name)"} on ${shownText(a.date) || "(no date)"}, fingerprint ${shownText(a.fingerprint).slice(0, 12)}${a.note ? `; note: ${shownText(a.note)}` : ""}.`
     : "Not approved.";
-  return section(doc, "Approval", "approval", el(doc, "p", {}, text), el(doc, "p", { class: "hint" }, "Written only by Approve, for one exact content; this view does not edit it."));
+  return section(fc, "approval", "Approval", "approval", el(doc, "p", {}, text), el(doc, "p", { class: "hint" }, "Written only by Approve, for one exact content; this view does not edit it."));
 }

@@ -10,6 +10,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { DEMO_RULESET } from "../../src/addin/demoRuleset.js";
+import { findShippedRuleset } from "../../src/core/index.js";
 import { STRENGTH_FIXTURE } from "../functions/fixtures.js";
 import { independentFingerprint } from "./fingerprint.js";
 import { openPane, screenshot, showView, storedFiles, storedValue, type Pane } from "./pane.js";
@@ -112,6 +113,45 @@ describe("exporting", () => {
     await pane.page.locator("#lw-export-show").click();
     expect(JSON.parse(await pane.page.locator("#lw-export-text").inputValue())).toEqual(STRENGTH_FIXTURE);
     await screenshot(pane.page, "transfer");
+  });
+});
+
+describe("stored copies of shipped rulesets", () => {
+  test("approving a checked shipped ruleset stores an approved copy with the same content, and needs no from-memory confirmation", async () => {
+    const id = "en1990-str-6.10";
+    const shipped = findShippedRuleset(id)!.ruleset.file;
+    // Its provenance has no from-memory source (README "Shipped rulesets": checked).
+    expect(shipped.provenance.every((p) => p.status === "confirmed")).toBe(true);
+    await showView(pane.page, "library");
+    await pane.page.locator(`#lw-rulesets li[data-ruleset-id="${id}"] button.ruleset`).click();
+    await showView(pane.page, "approve");
+    expect(await pane.page.locator("#lw-approve-memory").count()).toBe(0);
+    await pane.page.locator("#lw-approver").fill("B. Reviewer");
+    await pane.page.locator("#lw-approve-date").fill("2026-03-31");
+    await pane.page.locator("#lw-approve-button").click();
+    await pane.page.waitForSelector('#lw-approve-status [data-approval="approved"]');
+    await showView(pane.page, "library");
+    const item = pane.page.locator(`#lw-rulesets li[data-ruleset-id="${id}"]`);
+    expect(await item.getAttribute("data-source")).toBe("stored");
+    expect(await item.locator(".entry-source").textContent()).toBe("stored in this browser: a copy of the shipped ruleset, same content");
+    expect(await item.locator("[data-approval]").textContent()).toBe("approved by B. Reviewer on 2026-03-31");
+    const stored = (await storedFiles(pane.page)).find((f) => f.id === id)!;
+    expect(stored.approval.fingerprint).toBe(independentFingerprint(shipped));
+  });
+
+  test("an imported copy of a shipped id that differs is stored only when confirmed, and says it differs", async () => {
+    const id = "en1990-equ";
+    const changed = { ...findShippedRuleset(id)!.ruleset.file, version: "1.0.0-firm" };
+    await importText(JSON.stringify(changed));
+    await pane.page.waitForSelector("#lw-import-ok");
+    expect(await pane.page.locator("#lw-import-result .alarm-box p").first().textContent()).toBe(
+      `"${id}" is the id of a shipped ruleset; once stored, formulas naming it in this workbook use the imported copy, which DIFFERS from the shipped one.`,
+    );
+    await pane.page.locator("#lw-import-confirm").check();
+    await pane.page.locator("#lw-import-store").click();
+    const item = pane.page.locator(`#lw-rulesets li[data-ruleset-id="${id}"]`);
+    await item.waitFor();
+    expect(await item.locator(".entry-source").textContent()).toBe("stored in this browser: DIFFERS from the shipped ruleset of the same id");
   });
 });
 
