@@ -63,7 +63,7 @@ export function baseText(d: Draft): string {
     case "shipped":
       return `copy of the shipped ${b.id}${print}`;
     case "stored":
-      return d.text.includes(`"id": "${b.id}"`) ? `stored ${b.id}, being edited${print}` : `from the stored ${b.id}${print}`;
+      return draftId(d) === b.id ? `stored ${b.id}, being edited${print}` : `from the stored ${b.id}${print}`;
     case "imported":
       return "imported";
     case "new":

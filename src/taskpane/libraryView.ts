@@ -8,7 +8,7 @@ import type { LibraryEntry } from "../addin/rulesetLibrary.js";
 import { comboListOf } from "./comboList.js";
 import { button, el, uniqueId } from "./dom.js";
 import { exportButtons } from "./exportRuleset.js";
-import { draftOfCopy, draftOfStored, newIdProblem } from "./openDraft.js";
+import { draftOfCopy, draftOfStored, draftOfUnloadable, newIdProblem } from "./openDraft.js";
 import type { PaneContext } from "./paneContext.js";
 import { approvalBadge, fromMemoryList, sourceLine, verificationBadge } from "./statusText.js";
 import { takenIds } from "./takenIds.js";
@@ -77,7 +77,21 @@ function details(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
   const f = entry.ruleset?.file;
   const status = entry.status;
   if (!f || !status) {
-    root.append(el(doc, "p", { class: "problem" }, `This stored ruleset no longer loads: ${entry.problem ?? "unknown problem"}. It is kept as it was; export it or edit it as text to mend it.`));
+    root.append(
+      el(doc, "p", { class: "problem", id: "lw-selected-problem" }, `This stored ruleset no longer loads: ${entry.problem ?? "unknown problem"}. It is kept as it was stored; formulas naming it show this message. Edit it as a draft to mend it.`),
+      el(
+        doc,
+        "div",
+        { class: "actions" },
+        button(doc, "Edit as a draft", () => {
+          const existing = ctx.drafts.list().find((d) => d.base.kind === "stored" && d.base.id === entry.id);
+          const draft = existing ?? draftOfUnloadable(entry.id, ctx.store().find(entry.id)?.file);
+          if (!existing) ctx.drafts.put(draft);
+          ctx.openDraft = draft.key;
+          ctx.show("editor");
+        }),
+      ),
+    );
     if (entry.source === "stored") root.append(removeControl(ctx, entry));
     return root;
   }

@@ -33,6 +33,15 @@ export function draftOfStored(entry: LibraryEntry, now = new Date()): Draft {
   return draft(rulesetText(file), { kind: "stored", id: entry.id, fingerprint: entry.status!.fingerprint, approval: approvalOf(file) }, now);
 }
 
+/**
+ * A stored entry that no longer loads, as a draft to mend: its stored text as it is, under its own id.
+ * The approval it carries, if any, stays (it names the content that was approved).
+ */
+export function draftOfUnloadable(id: string, stored: unknown, now = new Date()): Draft {
+  const approval = (stored as { approval?: unknown } | null)?.approval;
+  return draft(rulesetText(stored), { kind: "stored", id, fingerprint: null, approval: approval && typeof approval === "object" ? (approval as ApprovalBlock) : EMPTY_APPROVAL }, now);
+}
+
 /** Why an id cannot name a new copy, or null when it can. */
 export function newIdProblem(id: string, takenIds: ReadonlySet<string>): string | null {
   if (id === "") return "give the copy an id of its own";

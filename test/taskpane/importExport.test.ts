@@ -180,6 +180,35 @@ describe("a save the browser refuses", () => {
     expect(drafts.drafts.some((d) => d.text.includes('"version": "0.0.2-test"'))).toBe(true);
   });
 
+});
+
+describe("a stored ruleset that no longer loads", () => {
+  test("is listed as not loading, kept as stored, and can be mended as a draft", async () => {
+    await pane.page.reload(); // the page of the test before still refuses stores
+    await pane.page.waitForSelector("#lw-rulesets li[data-ruleset-id]");
+    const broken = { ...structuredClone(DEMO_RULESET), id: "firm-typo" };
+    broken.combinations[0].expression = "1.3D + 1.5X";
+    const value = JSON.parse((await storedValue(pane.page)) ?? "{}") as { format: string; rulesets: unknown[] };
+    value.rulesets.push(broken);
+    await pane.page.evaluate((text) => window.localStorage.setItem("loadwright.rulesets", text), JSON.stringify(value));
+    await pane.page.reload();
+    const item = pane.page.locator('#lw-rulesets li[data-ruleset-id="firm-typo"]');
+    await item.waitFor();
+    expect(await item.locator("[data-verification]").textContent()).toBe("DOES NOT LOAD");
+    await item.locator("button.ruleset").click();
+    // Hand count: "X" is character 11 of "1.3D + 1.5X".
+    expect(await pane.page.locator("#lw-selected-problem").textContent()).toMatch(/^This stored ruleset no longer loads: combinations\[0\]\.expression, combination "A", character 11: unknown name "X"/);
+    await pane.page.locator("#lw-selected").getByRole("button", { name: "Edit as a draft" }).click();
+    await pane.page.waitForSelector('#lw-draft-status[data-state="problems"]');
+    expect(await pane.page.locator('[data-problem-for="combinations[0].expression"] .problem').textContent()).toMatch(/^combination "A", character 11: unknown name "X"/);
+    await pane.page.locator('[data-control-for="combinations[0].expression"]').fill("1.3D + 1.5L");
+    await pane.page.waitForSelector('#lw-draft-status[data-state="loads"]');
+    await pane.page.locator("#lw-store").click();
+    await pane.page.waitForSelector('#lw-rulesets li.selected[data-ruleset-id="firm-typo"]');
+    expect(await item.locator("[data-verification]").textContent()).toBe("⚠ UNVERIFIED");
+    expect((await storedFiles(pane.page)).find((f) => f.id === "firm-typo")?.combinations[0].expression).toBe("1.3D + 1.5L");
+  });
+
   test("writes nothing to the console", () => {
     expect(pane.console).toEqual([]);
   });

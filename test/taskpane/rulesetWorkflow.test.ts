@@ -29,6 +29,13 @@ const SHIPPED_2 = "1.2D + 1.2F + 1.6L + 0.5(Lr or S or R) + (1.6 or hResist)H";
 const MISSPELT_2 = "1.2D + 1.2F + 1.6L + 0.5(Lr or S or Rx) + (1.6 or hResist)H";
 /** The mended edit, invented for this test: the firm's copy leaves rain out of combination 2. */
 const FIRM_2 = "1.2D + 1.2F + 1.6L + 0.5(Lr or S) + (1.6 or hResist)H";
+/** Form controls without an accessible name (a label, aria-label, or a button's own text). */
+const unlabelledControls = () =>
+  pane.page.evaluate(() =>
+    [...document.querySelectorAll<HTMLElement>("#lw-view input, #lw-view select, #lw-view textarea, #lw-view button")]
+      .filter((c) => !((c as HTMLInputElement).labels?.length ?? 0) && !c.getAttribute("aria-label") && (c.tagName !== "BUTTON" || c.textContent?.trim() === ""))
+      .map((c) => c.outerHTML.slice(0, 100)),
+  );
 const today = new Date();
 const todayText = `${today.getFullYear()}-${String(today.getMonth() + 1).padStart(2, "0")}-${String(today.getDate()).padStart(2, "0")}`;
 
@@ -195,7 +202,7 @@ describe("comparing", () => {
 });
 
 describe("the pane at task-pane width", () => {
-  test("keeps the cautions in view on every view and never needs a horizontal scroll bar", async () => {
+  test("keeps the cautions in view on every view, labels every control, and never needs a horizontal scroll bar", async () => {
     for (const view of ["library", "editor", "compare", "approve", "transfer"] as const) {
       await showView(pane.page, view);
       const cautions = await pane.page.locator("#lw-cautions").textContent();
@@ -204,6 +211,7 @@ describe("the pane at task-pane width", () => {
       expect(cautions, view).toContain("Shipped rulesets must be checked against the standard before use");
       expect(await pane.page.locator("#lw-cautions").isVisible(), view).toBe(true);
       expect(await overflowsWidth(pane.page), view).toBe(false);
+      expect(await unlabelledControls(), view).toEqual([]);
     }
     await pane.page.setViewportSize({ width: 320, height: 800 });
     for (const view of ["library", "editor", "compare", "approve", "transfer"] as const) {
