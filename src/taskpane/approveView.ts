@@ -6,6 +6,7 @@
  */
 import { approveRuleset, describeProblem, formatPath } from "../core/index.js";
 import type { LibraryEntry } from "../addin/rulesetLibrary.js";
+import { calendarDateProblem } from "./approvalDate.js";
 import { button, el, todayText } from "./dom.js";
 import type { PaneContext } from "./paneContext.js";
 import { approvalBadge, fromMemoryList, sourceLine, verificationBadge } from "./statusText.js";
@@ -102,6 +103,13 @@ function approvalForm(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
       memoryProblem.textContent = "Confirm that you checked the from-memory parts listed above against the standard; nothing was approved.";
       memoryCheck.setAttribute("aria-invalid", "true");
       memoryCheck.focus();
+      return;
+    }
+    const badDate = calendarDateProblem(date.value);
+    if (badDate) {
+      dateProblem.textContent = `${badDate}; nothing was approved.`;
+      date.setAttribute("aria-invalid", "true");
+      date.focus();
       return;
     }
     const noteText = [note.value.trim(), memoryCheck ? MEMORY_CHECK_NOTE : ""].filter((t) => t !== "").join(" ");

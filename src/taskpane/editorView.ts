@@ -384,7 +384,8 @@ function renderSummary(doc: Document, summary: HTMLElement, problems: readonly E
     return el(doc, "li", {}, button(doc, `${p.full}${where}`, () => goTo(p), { class: "link problem-link" }));
   });
   for (const [path, message] of local) items.push(el(doc, "li", {}, `${path}: ${message}`));
-  summary.replaceChildren(el(doc, "p", { class: "problem" }, `Problems (${items.length}) — each is also shown beside its field:`), el(doc, "ol", { class: "problem-list" }, ...items));
+  const how = mode === "text" ? "click one to select it in the text" : "each is also shown beside its field; click one to go there";
+  summary.replaceChildren(el(doc, "p", { class: "problem" }, `Problems (${items.length}) — ${how}:`), el(doc, "ol", { class: "problem-list" }, ...items));
 }
 
 function renderStoreBar(ctx: PaneContext, draft: Draft, check: DraftCheck, localCount: number, bar: HTMLElement): void {
