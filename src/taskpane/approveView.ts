@@ -9,7 +9,7 @@ import type { LibraryEntry } from "../addin/rulesetLibrary.js";
 import { calendarDateProblem } from "./approvalDate.js";
 import { button, el, todayText } from "./dom.js";
 import type { PaneContext } from "./paneContext.js";
-import { approvalBadge, fromMemoryList, sourceLine, verificationBadge } from "./statusText.js";
+import { approvalBadge, fromMemoryList, sourceLine, unverifiedSuffix, verificationBadge } from "./statusText.js";
 
 /** Recorded in the approval note when an UNVERIFIED ruleset is approved. */
 export const MEMORY_CHECK_NOTE = "The approver confirmed checking the parts its provenance marks as from memory against the standard.";
@@ -25,7 +25,7 @@ export function approveView(ctx: PaneContext): HTMLElement {
   }
   const entry = approvable.find((e) => e.id === ctx.selected) ?? approvable[0];
   ctx.selected = entry.id;
-  const pick = el(doc, "select", { id: "lw-approve-pick" }, ...approvable.map((e) => el(doc, "option", { value: e.id }, `${e.id} (${e.source === "stored" ? `stored in ${ctx.storedWhere}` : "shipped"})`))) as HTMLSelectElement;
+  const pick = el(doc, "select", { id: "lw-approve-pick" }, ...approvable.map((e) => el(doc, "option", { value: e.id }, `${e.id} (${e.source === "stored" ? `stored in ${ctx.storedWhere}` : "shipped"})${unverifiedSuffix(e.status)}`))) as HTMLSelectElement;
   pick.value = entry.id;
   pick.addEventListener("change", () => {
     ctx.selected = pick.value;

@@ -10,7 +10,7 @@ import { button, el } from "./dom.js";
 import { checkDraft } from "./draftCheck.js";
 import { draftId } from "./editorView.js";
 import type { PaneContext } from "./paneContext.js";
-import { approvalBadge, verificationBadge } from "./statusText.js";
+import { approvalBadge, unverifiedSuffix, verificationBadge } from "./statusText.js";
 
 interface Candidate {
   value: string;
@@ -25,12 +25,12 @@ function candidates(ctx: PaneContext): Candidate[] {
   const out: Candidate[] = [];
   for (const d of ctx.drafts.list()) {
     const check = checkDraft(d.text, d.base.approval);
-    out.push({ value: `draft:${d.key}`, label: `draft ${draftId(d)}${check.ruleset ? "" : " (does not load)"}`, group: "Drafts", ruleset: check.ruleset, status: check.status, why: check.ruleset ? null : "the draft does not load yet" });
+    out.push({ value: `draft:${d.key}`, label: `draft ${draftId(d)}${check.ruleset ? unverifiedSuffix(check.status) : " (does not load)"}`, group: "Drafts", ruleset: check.ruleset, status: check.status, why: check.ruleset ? null : "the draft does not load yet" });
   }
   for (const e of ctx.library().entries.filter((x) => x.source === "stored")) {
-    out.push({ value: `stored:${e.id}`, label: `${e.id} (stored)${e.ruleset ? "" : " (does not load)"}`, group: "Stored", ruleset: e.ruleset, status: e.status, why: e.problem });
+    out.push({ value: `stored:${e.id}`, label: `${e.id} (stored)${e.ruleset ? unverifiedSuffix(e.status) : " (does not load)"}`, group: "Stored", ruleset: e.ruleset, status: e.status, why: e.problem });
   }
-  for (const s of shippedRulesets()) out.push({ value: `shipped:${s.id}`, label: `${s.id} (shipped)`, group: "Shipped", ruleset: s.ruleset, status: s.status, why: null });
+  for (const s of shippedRulesets()) out.push({ value: `shipped:${s.id}`, label: `${s.id} (shipped)${unverifiedSuffix(s.status)}`, group: "Shipped", ruleset: s.ruleset, status: s.status, why: null });
   return out;
 }
 

@@ -49,6 +49,11 @@ export function approvalBadge(doc: Document, file: RulesetFile, status: RulesetS
   return el(doc, "span", { class: kind === "changed-since-approval" ? "badge badge-alarm" : kind === "approved" ? "badge badge-ok" : "badge", "data-approval": kind }, approvalLine(file, status));
 }
 
+/** For a ruleset named in a list (a select's option): " — UNVERIFIED" where it is, so no choice hides it. */
+export function unverifiedSuffix(status: RulesetStatus | null): string {
+  return status?.verification === "unverified" ? " — UNVERIFIED" : "";
+}
+
 /** What an UNVERIFIED ruleset's provenance marks as from memory, one line per source. */
 export function fromMemoryList(doc: Document, file: RulesetFile): HTMLElement {
   const items = file.provenance

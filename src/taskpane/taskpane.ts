@@ -44,6 +44,8 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
   const tabs = $("lw-tabs");
   const panel = $("lw-view");
   let current: ViewName = "library";
+  // A notice given just before a view is switched to (after storing, say) is shown there; older ones go.
+  let noticeFresh = false;
 
   const ctx: PaneContext = {
     doc,
@@ -58,11 +60,13 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
       notice.textContent = text;
       notice.className = kind === "problem" ? "notice notice-problem" : "notice";
       notice.hidden = false;
+      noticeFresh = true;
     },
     show: (view) => {
       const same = view === current;
       const scroll = same ? (doc.defaultView?.scrollY ?? 0) : 0;
-      if (!same) notice.hidden = true;
+      if (!same && !noticeFresh) notice.hidden = true;
+      noticeFresh = false;
       current = view;
       renderTabs();
       panel.setAttribute("aria-labelledby", `lw-tab-${view}`);

@@ -13,7 +13,7 @@ import { draftId } from "./editorView.js";
 import { downloadRuleset, exportFileName } from "./exportRuleset.js";
 import { draftOfImport, rulesetText } from "./openDraft.js";
 import type { PaneContext } from "./paneContext.js";
-import { approvalBadge, sourceLine, verificationBadge } from "./statusText.js";
+import { approvalBadge, sourceLine, unverifiedSuffix, verificationBadge } from "./statusText.js";
 
 export function transferView(ctx: PaneContext): HTMLElement {
   return el(ctx.doc, "div", { id: "lw-transfer" }, importSection(ctx), exportSection(ctx));
@@ -145,13 +145,13 @@ function exportSection(ctx: PaneContext): HTMLElement {
     if (!e.ruleset) continue;
     const key = `${e.source}:${e.id}`;
     files.set(key, e.ruleset.file);
-    options.push(el(doc, "option", { value: key }, `${e.id} (${e.source})`));
+    options.push(el(doc, "option", { value: key }, `${e.id} (${e.source})${unverifiedSuffix(e.status)}`));
   }
   for (const d of ctx.drafts.list()) {
     const checked = checkDraft(d.text, d.base.approval);
     if (!checked.ruleset) continue;
     files.set(`draft:${d.key}`, checked.ruleset.file);
-    options.push(el(doc, "option", { value: `draft:${d.key}` }, `draft ${draftId(d)} (not stored)`));
+    options.push(el(doc, "option", { value: `draft:${d.key}` }, `draft ${draftId(d)} (not stored)${unverifiedSuffix(checked.status)}`));
   }
   const pick = el(doc, "select", { id: "lw-export-pick" }, ...options) as HTMLSelectElement;
   const selectedKey = [...files.keys()].find((k) => k.endsWith(`:${ctx.selected ?? ""}`) && !k.startsWith("draft:"));

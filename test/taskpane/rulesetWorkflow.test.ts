@@ -112,6 +112,8 @@ describe("editing a copy of a shipped ruleset", () => {
     await pane.page.waitForSelector('#lw-draft-status[data-state="loads"]');
     await pane.page.locator("#lw-store").click();
     await pane.page.waitForSelector('#lw-rulesets li.selected[data-ruleset-id="firm-asce7-16"]');
+    expect(await pane.page.locator("#lw-notice").isVisible()).toBe(true);
+    expect(await pane.page.locator("#lw-notice").textContent()).toMatch(/^Stored firm-asce7-16 1\.0\.0 in this browser \(fingerprint [0-9a-f]{12}\); the draft is closed\.$/);
     await pane.page.reload();
     await pane.page.waitForSelector('#lw-rulesets li[data-ruleset-id="firm-asce7-16"]');
     expect(await entry("firm-asce7-16").locator(".entry-source").textContent()).toBe("stored in this browser");
@@ -171,6 +173,9 @@ describe("approving", () => {
 describe("comparing", () => {
   test("shows the copy's changed combination and the concrete rows only the shipped original forms", async () => {
     await showView(pane.page, "compare");
+    // An UNVERIFIED ruleset says so even as a choice in a list.
+    expect(await pane.page.locator('#lw-compare-before option[value="shipped:asce7-16-strength"]').textContent()).toBe("asce7-16-strength (shipped) — UNVERIFIED");
+    expect(await pane.page.locator('#lw-compare-before option[value="shipped:en1990-equ"]').textContent()).toBe("en1990-equ (shipped)");
     await pane.page.locator("#lw-compare-before").selectOption("shipped:asce7-16-strength");
     await pane.page.locator("#lw-compare-after").selectOption("stored:firm-asce7-16");
     // Without SDS (no default) the rows cannot be formed; the pane says so and names it.
