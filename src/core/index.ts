@@ -19,13 +19,14 @@ export {
 
 // Rulesets
 export { loadRuleset } from "./ruleset/loadRuleset.js";
+export { duplicateKeys, type DuplicateKey } from "./ruleset/jsonSyntax.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
 export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";
 export { rulesetStatus, VERIFICATION_TEXT, type RulesetStatus, type Verification, type Approval } from "./ruleset/status.js";
-export { RULESET_FORMAT, rulesetSchema, type RulesetFile } from "./ruleset/schema.js";
+export { NAME_PATTERN, RULESET_FORMAT, RULESET_ID_PATTERN, rulesetSchema, type RulesetFile } from "./ruleset/schema.js";
 export type { Ruleset, LoadSymbol, Parameter, Combination, CaseMode } from "./ruleset/model.js";
-export { compareRulesets, type RulesetComparison, type EntryDifference, type CombinationDifference, type FieldDifference } from "./ruleset/compareRulesets.js";
+export { compareRulesets, rowsById, type CompareOptions, type RulesetComparison, type EntryDifference, type CombinationDifference, type FieldDifference } from "./ruleset/compareRulesets.js";
 export { approveRuleset, withoutApproval } from "./ruleset/approveRuleset.js";
 
 // Parameters

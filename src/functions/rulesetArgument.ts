@@ -3,13 +3,11 @@
  * with Loadwright, or a range of [id, expression, clause] rows typed in cells.
  */
 import { closest } from "fastest-levenshtein";
-import { rulesetFromRows, rulesetStatus, type Cell, type Problem, type Result } from "../core/index.js";
+import { RULESET_ID_PATTERN, rulesetFromRows, rulesetStatus, type Cell, type Problem, type Result } from "../core/index.js";
 import { findInLibrary, library, storeLocation } from "../addin/rulesetLibrary.js";
 import { asMatrix, blankZeroRows, isEmptyArgument } from "./excelCells.js";
 import type { ResolvedRuleset } from "./formula.js";
 
-/** A ruleset id as the file format allows it. */
-const RULESET_ID = /^[a-z0-9][a-z0-9._-]*$/;
 
 const fail = (message: string, place: Problem["place"] = {}): Result<never> => ({
   ok: false,
@@ -22,7 +20,7 @@ export function readRulesetArgument(raw: unknown): Result<ResolvedRuleset> {
     return fail("no ruleset given: write a ruleset id in quotes (e.g. a shipped id that LW.RULESET accepts) or select a range of [id, expression, clause] rows", { row: 0, column: 0 });
   }
   const only = m.length === 1 && m[0].length === 1 ? m[0][0] : null;
-  if (typeof only === "string" && RULESET_ID.test(only.trim())) return byId(only.trim());
+  if (typeof only === "string" && RULESET_ID_PATTERN.test(only.trim())) return byId(only.trim());
   return typed(blankZeroRows(m));
 }
 

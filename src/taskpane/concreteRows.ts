@@ -1,52 +1,21 @@
 /**
- * What a comparison needs to show what the numbers will do: each combination's
- * concrete rows as factors on the load symbols ("D 1.2, L 1.6, S 0.5"), for the
- * parameter values the checker gives. compareRulesets forms these rows only
- * with every parameter's default, so a ruleset with a parameter that has no
- * default (SDS in the ASCE/SEI 7 rulesets) gets none; here the checker can give it.
+ * What a comparison needs to show what the numbers will do: the engine's
+ * comparison with each combination's concrete rows formed for the parameter
+ * values the checker types ("SDS=1.0"), so that a ruleset with a parameter
+ * without default (SDS in the ASCE/SEI 7 rulesets) can still be compared row by row.
  */
 import {
-  comboRows,
   compareRulesets,
   describeProblem,
-  formatNumber,
   parseParameterText,
-  planCombinations,
-  resolveParameters,
-  type EntryDifference,
-  type ParameterInput,
+  type CombinationDifference,
   type Problem,
   type Result,
   type Ruleset,
   type RulesetComparison,
 } from "../core/index.js";
 
-/** Concrete rows per combination id, each as its factors on the symbols, in the ruleset's order. */
-export function rowsByCombination(ruleset: Ruleset, input: ParameterInput): Result<Map<string, string[]>> {
-  const params = resolveParameters(ruleset, input);
-  if (!params.ok) return params;
-  const plan = planCombinations(ruleset, params.value, { cases: null });
-  if (!plan.ok) return plan;
-  const rows = comboRows(plan.value);
-  if (!rows.ok) return rows;
-  const out = new Map<string, string[]>();
-  for (const row of rows.value) {
-    const factors = row.factors
-      .map((f, i) => (f === 0 ? "" : `${plan.value.cases[i].header} ${formatNumber(f)}`))
-      .filter((t) => t !== "")
-      .join(", ");
-    const list = out.get(row.combination) ?? [];
-    if (!list.includes(factors)) list.push(factors);
-    out.set(row.combination, list);
-  }
-  return { ok: true, value: out };
-}
-
-export interface CombinationChange extends EntryDifference {
-  /** Null where the rows could not be formed (see `rowProblems`). */
-  rowsOnlyBefore: string[] | null;
-  rowsOnlyAfter: string[] | null;
-}
+export type CombinationChange = CombinationDifference;
 
 export interface PaneComparison {
   comparison: RulesetComparison;
@@ -91,39 +60,15 @@ export function compareForPane(before: Ruleset, after: Ruleset, paramsText: stri
       })),
     };
   }
-  const pick = (names: Set<string>) => Object.fromEntries(Object.entries(given.value).filter(([n]) => names.has(n)));
-  const rowsBefore = rowsByCombination(before, pick(inBefore));
-  const rowsAfter = rowsByCombination(after, pick(inAfter));
-  const comparison = compareRulesets(before, after);
-
-  const changes = new Map<string, CombinationChange>();
-  for (const c of comparison.combinations) changes.set(c.name, { name: c.name, change: c.change, details: c.details.filter((d) => d !== "the concrete rows are the same"), rowsOnlyBefore: null, rowsOnlyAfter: null });
-  const ids = [...before.combinations.map((c) => c.id), ...after.combinations.map((c) => c.id).filter((id) => !before.combinations.some((c) => c.id === id))];
-  const combinations: CombinationChange[] = [];
-  for (const id of ids) {
-    let change = changes.get(id);
-    if (rowsBefore.ok && rowsAfter.ok) {
-      const a = rowsBefore.value.get(id) ?? [];
-      const b = rowsAfter.value.get(id) ?? [];
-      const onlyBefore = a.filter((r) => !b.includes(r));
-      const onlyAfter = b.filter((r) => !a.includes(r));
-      if (!change && onlyBefore.length + onlyAfter.length > 0) {
-        change = { name: id, change: "changed", details: ["the text is the same; the concrete rows differ (a symbol or a parameter changed)"], rowsOnlyBefore: null, rowsOnlyAfter: null };
-      }
-      if (change) {
-        change.rowsOnlyBefore = onlyBefore;
-        change.rowsOnlyAfter = onlyAfter;
-      }
-    }
-    if (change) combinations.push(change);
-  }
-  const problemsOf = (r: Result<unknown>) => (r.ok ? [] : grouped(r.problems));
+  const comparison = compareRulesets(before, after, { parameters: given.value });
+  // The pane says "rows are the same" by showing none; the engine's sentence for it is left out.
+  const combinations = comparison.combinations.map((c) => ({ ...c, details: c.details.filter((d) => d !== "the concrete rows are the same") }));
   return {
     ok: true,
     value: {
       comparison,
       combinations,
-      rowProblems: { before: problemsOf(rowsBefore), after: problemsOf(rowsAfter) },
+      rowProblems: { before: grouped(comparison.rowProblems.before), after: grouped(comparison.rowProblems.after) },
       notUsed: {
         before: Object.keys(given.value).filter((n) => !inBefore.has(n)),
         after: Object.keys(given.value).filter((n) => !inAfter.has(n)),

@@ -5,6 +5,7 @@
  * a field written twice in one object, of which the parser silently keeps the last.
  */
 import { findNodeAtLocation, parseTree, type Node, type ParseError } from "jsonc-parser";
+import { duplicateKeys as findDuplicateKeys } from "../core/index.js";
 
 export interface TextSpot {
   /** 0-based offset of the first character and the length to select. */
@@ -66,27 +67,9 @@ export interface DuplicateKey {
   spot: TextSpot;
 }
 
-/** Every field name written twice in the same object, with the path of the later one. */
+/** Every field name written twice in the same object, with the path of the later one (found by the engine). */
 export function duplicateKeys(text: string): DuplicateKey[] {
-  const root = tree(text);
-  const out: DuplicateKey[] = [];
-  const walk = (node: Node, path: (string | number)[]) => {
-    if (node.type === "object") {
-      const seen = new Set<string>();
-      for (const property of node.children ?? []) {
-        const [keyNode, valueNode] = property.children ?? [];
-        if (!keyNode || typeof keyNode.value !== "string") continue;
-        const key = keyNode.value;
-        if (seen.has(key)) out.push({ path: [...path, key], key, spot: spotAt(text, keyNode.offset, keyNode.length) });
-        seen.add(key);
-        if (valueNode) walk(valueNode, [...path, key]);
-      }
-    } else if (node.type === "array") {
-      (node.children ?? []).forEach((child, i) => walk(child, [...path, i]));
-    }
-  };
-  if (root) walk(root, []);
-  return out;
+  return findDuplicateKeys(text).map((d) => ({ path: d.path, key: d.key, spot: spotAt(text, d.offset, d.length) }));
 }
 
 /** The spot of the first JSON syntax error, if the text has one. */

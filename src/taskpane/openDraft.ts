@@ -4,14 +4,12 @@
  * a shipped or stored one under a new id the user chooses (no approval: the
  * copy is another content), an import, or a new ruleset from a small template.
  */
-import { RULESET_FORMAT, shortFingerprint, withoutApproval, type RulesetFile } from "../core/index.js";
+import { RULESET_FORMAT, RULESET_ID_PATTERN, shortFingerprint, withoutApproval, type RulesetFile } from "../core/index.js";
 import type { LibraryEntry } from "../addin/rulesetLibrary.js";
 import { EMPTY_APPROVAL, type ApprovalBlock } from "./draftCheck.js";
 import { newDraftKey, type Draft, type DraftBase } from "./draftStore.js";
 import { todayText } from "./dom.js";
 
-/** The ruleset id form of the file format (schema.ts). */
-export const RULESET_ID = /^[a-z0-9][a-z0-9._-]*$/;
 
 export function rulesetText(file: unknown): string {
   return `${JSON.stringify(file, null, 2)}\n`;
@@ -45,7 +43,7 @@ export function draftOfUnloadable(id: string, stored: unknown, now = new Date())
 /** Why an id cannot name a new copy, or null when it can. */
 export function newIdProblem(id: string, takenIds: ReadonlySet<string>): string | null {
   if (id === "") return "give the copy an id of its own";
-  if (!RULESET_ID.test(id)) return `"${id}" is not a ruleset id: lower-case letters, digits, '.', '_' or '-', starting with a letter or digit`;
+  if (!RULESET_ID_PATTERN.test(id)) return `"${id}" is not a ruleset id: lower-case letters, digits, '.', '_' or '-', starting with a letter or digit`;
   if (takenIds.has(id)) return `"${id}" already names a shipped or stored ruleset or an open draft; choose another id`;
   return null;
 }

@@ -5,13 +5,12 @@
  * field of the wrong type typed in the text view) is left in the draft as it
  * is and its problem is shown at the nearest field.
  */
-import { formatPath } from "../core/index.js";
+import { formatPath, NAME_PATTERN } from "../core/index.js";
 import { isObject, renameKey, shownText, type JsonObject } from "./dataPath.js";
 import { button, el } from "./dom.js";
 import { entryButton, fieldShell, numberField, optionOf, parsedField, selectField, textField, type FormContext } from "./formFields.js";
 
 /** The file format's rule for symbol, parameter and value names (README, "Rulesets"). */
-const NAME_PATTERN = /^[\p{L}_][\p{L}\p{N}_]*$/u;
 
 export function rulesetForm(fc: FormContext): HTMLElement {
   const { doc } = fc;

@@ -1,6 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { findShippedRuleset, loadRuleset, type Ruleset } from "../../src/core/index.js";
-import { compareForPane, rowsByCombination } from "../../src/taskpane/concreteRows.js";
+import { rowsById } from "../../src/core/index.js";
+import { compareForPane } from "../../src/taskpane/concreteRows.js";
 
 const shipped = (id: string): Ruleset => {
   const found = findShippedRuleset(id);
@@ -36,15 +37,15 @@ function copyWithoutRainInCombination2(): Ruleset {
   return loaded.value;
 }
 
-describe("rowsByCombination", () => {
+describe("rowsById, as the pane forms rows to compare", () => {
   test("forms 1.4D with F at the factor of D", () => {
-    const rows = rowsByCombination(shipped("asce7-16-strength"), { SDS: 1.0 });
+    const rows = rowsById(shipped("asce7-16-strength"), { SDS: 1.0 });
     // ASCE/SEI 7-16 §2.3.1 (1): 1.4D [confirmed for the 7-10 list]; F takes the factor of D (7-10 §2.3.2) [confirmed].
     expectRows(rows.ok ? rows.value.get("1") : null, [{ D: 1.4, F: 1.4 }]);
   });
 
   test("forms 0.9D − Ev + Eh with the parameters given, E both ways and H at 1.6 or left at hResist = 0", () => {
-    const rows = rowsByCombination(shipped("asce7-16-strength"), { SDS: 1.1, rho: 1.3 });
+    const rows = rowsById(shipped("asce7-16-strength"), { SDS: 1.1, rho: 1.3 });
     // ICC worked example (ASCE 7-10 era), SDS = 1.10, ρ = 1.3: (0.9 − 0.2·1.10) = 0.68 on D with 1.3QE [confirmed];
     // F at 0.9 with D (7-10 §2.3.2) [confirmed]; H 1.6 where it adds, 0 where it resists and is not permanent [confirmed rule];
     // E acts both ways, common practice (no source) for a seismic load effect.
@@ -57,7 +58,7 @@ describe("rowsByCombination", () => {
   });
 
   test("says which parameter is missing and where it is read, rather than forming no rows silently", () => {
-    const rows = rowsByCombination(shipped("asce7-16-strength"), {});
+    const rows = rowsById(shipped("asce7-16-strength"), {});
     expect(rows.ok).toBe(false);
     expect(!rows.ok && rows.problems.map((p) => p.place.entry)).toEqual(["6", "7"]);
     expect(!rows.ok && rows.problems[0].message).toMatch(/^parameter SDS has no default/);

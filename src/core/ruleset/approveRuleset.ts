@@ -10,7 +10,9 @@ import type { RulesetFile } from "./schema.js";
 export function approveRuleset(file: RulesetFile, approvedBy: string, date: string, note?: string): Result<RulesetFile> {
   const who = approvedBy.trim();
   if (who === "") return fail(problem("ruleset-field", "give the name of the person approving", { path: ["approval", "approvedBy"] }));
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(date) || Number.isNaN(Date.parse(`${date}T00:00:00Z`))) {
+  // A day of the calendar: Date rolls 2026-02-30 over into March, so the date must read back unchanged.
+  const parsed = new Date(`${date}T00:00:00Z`);
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(date) || Number.isNaN(parsed.getTime()) || parsed.toISOString().slice(0, 10) !== date) {
     return fail(problem("ruleset-field", `"${date}" is not a date written YYYY-MM-DD`, { path: ["approval", "date"] }));
   }
   const approval: RulesetFile["approval"] = { approvedBy: who, date, fingerprint: fingerprintOf(file) };

@@ -8,6 +8,8 @@ import { comboRows } from "../evaluate/combos.js";
 import { formatNumber } from "../plan/factor.js";
 import { planCombinations } from "../plan/planCombinations.js";
 import { resolveParameters } from "../params/resolveParameters.js";
+import { ok, type Problem, type Result } from "../problems.js";
+import type { ParameterInput } from "../params/parameterInput.js";
 import { fingerprintOf } from "./fingerprint.js";
 import type { Ruleset } from "./model.js";
 
@@ -33,8 +35,19 @@ export interface CombinationDifference extends EntryDifference {
   rowsOnlyAfter: string[] | null;
 }
 
+export interface CompareOptions {
+  /**
+   * Parameter values to form the concrete rows with (each side takes those it
+   * declares); without them, defaults — and a combination reading a parameter
+   * without default cannot be formed.
+   */
+  parameters?: ParameterInput;
+}
+
 export interface RulesetComparison {
   same: boolean;
+  /** Why one side's concrete rows could not be formed (a parameter without default not given, say). */
+  rowProblems: { before: Problem[]; after: Problem[] };
   fingerprints: { before: string; after: string };
   identity: FieldDifference[];
   symbols: EntryDifference[];
@@ -43,7 +56,7 @@ export interface RulesetComparison {
   notes: FieldDifference[];
 }
 
-export function compareRulesets(before: Ruleset, after: Ruleset): RulesetComparison {
+export function compareRulesets(before: Ruleset, after: Ruleset, options: CompareOptions = {}): RulesetComparison {
   const a = before.file;
   const b = after.file;
   const identity: FieldDifference[] = [];
@@ -59,14 +72,18 @@ export function compareRulesets(before: Ruleset, after: Ruleset): RulesetCompari
   field("version", a.version, b.version);
   field("provenance", a.provenance, b.provenance);
 
+  // Notes are free text: which notes one side has and the other lacks.
   const notes: FieldDifference[] = [];
-  if (text(a.notes) !== text(b.notes)) notes.push({ field: "notes", before: text(a.notes), after: text(b.notes) });
+  for (const n of a.notes ?? []) if (!(b.notes ?? []).includes(n)) notes.push({ field: "note removed", before: n, after: "" });
+  for (const n of b.notes ?? []) if (!(a.notes ?? []).includes(n)) notes.push({ field: "note added", before: "", after: n });
 
   const symbols = entries(a.symbols, b.symbols);
   const parameters = entries(a.parameters ?? {}, b.parameters ?? {});
 
-  const rowsA = rowsById(before);
-  const rowsB = rowsById(after);
+  const formedA = rowsById(before, options.parameters ?? {});
+  const formedB = rowsById(after, options.parameters ?? {});
+  const rowsA = formedA.ok ? formedA.value : null;
+  const rowsB = formedB.ok ? formedB.value : null;
   const combinations: CombinationDifference[] = [];
   const byIdA = new Map(a.combinations.map((c) => [c.id, c]));
   const byIdB = new Map(b.combinations.map((c) => [c.id, c]));
@@ -85,12 +102,14 @@ export function compareRulesets(before: Ruleset, after: Ruleset): RulesetCompari
     const rowsDiffer = onlyBefore === null || onlyAfter === null ? false : onlyBefore.length + onlyAfter.length > 0;
     if (details.length === 0 && !rowsDiffer) continue;
     if (details.length > 0 && onlyBefore !== null && onlyAfter !== null && !rowsDiffer) details.push("the concrete rows are the same");
+    if (details.length === 0) details.push("the text is the same; the concrete rows differ (a symbol or a parameter changed)");
     combinations.push({ name: id, change: "changed", details, rowsOnlyBefore: onlyBefore, rowsOnlyAfter: onlyAfter });
   }
 
   const fingerprints = { before: fingerprintOf(a), after: fingerprintOf(b) };
   return {
     same: fingerprints.before === fingerprints.after,
+    rowProblems: { before: formedA.ok ? [] : formedA.problems, after: formedB.ok ? [] : formedB.problems },
     fingerprints,
     identity,
     symbols,
@@ -100,14 +119,15 @@ export function compareRulesets(before: Ruleset, after: Ruleset): RulesetCompari
   };
 }
 
-/** Each combination's concrete rows for one case per symbol and the parameter defaults, as "D 1.2, L 1.6" texts. */
-function rowsById(ruleset: Ruleset): Map<string, string[]> | null {
-  const params = resolveParameters(ruleset, {});
-  if (!params.ok) return null;
+/** Each combination's concrete rows for one case per symbol, as "D 1.2, L 1.6" texts. */
+export function rowsById(ruleset: Ruleset, given: ParameterInput = {}): Result<Map<string, string[]>> {
+  const declared = Object.fromEntries(Object.entries(given).filter(([n]) => ruleset.parameterByName.has(n)));
+  const params = resolveParameters(ruleset, declared);
+  if (!params.ok) return params;
   const plan = planCombinations(ruleset, params.value, { cases: null });
-  if (!plan.ok) return null;
+  if (!plan.ok) return plan;
   const rows = comboRows(plan.value);
-  if (!rows.ok) return null;
+  if (!rows.ok) return rows;
   const out = new Map<string, string[]>();
   for (const row of rows.value) {
     const factors = row.factors
@@ -118,7 +138,7 @@ function rowsById(ruleset: Ruleset): Map<string, string[]> | null {
     if (!list.includes(factors)) list.push(factors);
     out.set(row.combination, list);
   }
-  return out;
+  return ok(out);
 }
 
 function entries(a: Record<string, unknown>, b: Record<string, unknown>): EntryDifference[] {

@@ -1,9 +1,10 @@
 /**
  * Where JSON text goes wrong, as line and column: the built-in parser's message
  * names no position on every platform, so a tolerant scanner locates the first
- * error once JSON.parse has refused the text.
+ * error once JSON.parse has refused the text; and a field written twice, which
+ * JSON.parse accepts silently (keeping the last), is found the same way.
  */
-import { parse, printParseErrorCode, type ParseError } from "jsonc-parser";
+import { parse, parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser";
 
 const WORDS: Record<string, string> = {
   InvalidSymbol: "unexpected text",
@@ -28,8 +29,45 @@ export function jsonSyntaxError(text: string, fallback: string): string {
   parse(text, errors, { disallowComments: true, allowTrailingComma: false, allowEmptyContent: false });
   const first = errors[0];
   if (!first) return fallback;
-  const before = text.slice(0, first.offset);
-  const line = before.split("\n").length;
-  const column = first.offset - before.lastIndexOf("\n");
+  const { line, column } = lineAndColumn(text, first.offset);
   return `${WORDS[printParseErrorCode(first.error)] ?? "unexpected text"} at line ${line}, column ${column}`;
+}
+
+export interface DuplicateKey {
+  /** JSON path of the later of the two fields. */
+  path: (string | number)[];
+  key: string;
+  /** Offset of the later key's opening quote, and its line and column (1-based). */
+  offset: number;
+  length: number;
+  line: number;
+  column: number;
+}
+
+/** Every field name written twice in the same object, with the path and place of the later one. */
+export function duplicateKeys(text: string): DuplicateKey[] {
+  const root = parseTree(text, [], { disallowComments: true, allowTrailingComma: false });
+  const out: DuplicateKey[] = [];
+  const walk = (node: Node, path: (string | number)[]) => {
+    if (node.type === "object") {
+      const seen = new Set<string>();
+      for (const property of node.children ?? []) {
+        const [keyNode, valueNode] = property.children ?? [];
+        if (!keyNode || typeof keyNode.value !== "string") continue;
+        const key = keyNode.value;
+        if (seen.has(key)) out.push({ path: [...path, key], key, offset: keyNode.offset, length: keyNode.length, ...lineAndColumn(text, keyNode.offset) });
+        seen.add(key);
+        if (valueNode) walk(valueNode, [...path, key]);
+      }
+    } else if (node.type === "array") {
+      (node.children ?? []).forEach((child, i) => walk(child, [...path, i]));
+    }
+  };
+  if (root) walk(root, []);
+  return out;
+}
+
+function lineAndColumn(text: string, offset: number): { line: number; column: number } {
+  const before = text.slice(0, offset);
+  return { line: before.split("\n").length, column: offset - before.lastIndexOf("\n") };
 }

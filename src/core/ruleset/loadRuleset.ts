@@ -7,7 +7,7 @@ import { buildRuleset } from "./buildRuleset.js";
 import type { Ruleset } from "./model.js";
 import { rulesetSchema } from "./schema.js";
 import { schemaProblems } from "./schemaProblems.js";
-import { jsonSyntaxError } from "./jsonSyntax.js";
+import { duplicateKeys, jsonSyntaxError } from "./jsonSyntax.js";
 
 export function loadRuleset(input: string | unknown): Result<Ruleset> {
   let data: unknown = input;
@@ -16,6 +16,10 @@ export function loadRuleset(input: string | unknown): Result<Ruleset> {
       data = JSON.parse(input);
     } catch (e) {
       return fail(problem("ruleset-json", `not valid JSON: ${jsonSyntaxError(input, e instanceof Error ? e.message : String(e))}`));
+    }
+    const twice = duplicateKeys(input);
+    if (twice.length > 0) {
+      return fail(...twice.map((d) => problem("ruleset-json", `field "${d.key}" is written twice in one object (line ${d.line}, column ${d.column}); JSON keeps only the last, so say which is meant`, { path: d.path })));
     }
   }
   const parsed = rulesetSchema.safeParse(data);

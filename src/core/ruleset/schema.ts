@@ -10,6 +10,9 @@ export const RULESET_FORMAT = "loadwright-ruleset/1";
 /** Load symbols, parameters and values: a letter, then letters, digits or "_" (D, Lr, SDS, psi0, Ω0). */
 export const NAME_PATTERN = /^[\p{L}_][\p{L}\p{N}_]*$/u;
 
+/** A ruleset id: lower-case letters, digits, ".", "_", "-" (asce7-16-strength). */
+export const RULESET_ID_PATTERN = /^[a-z0-9][a-z0-9._-]*$/;
+
 const name = z.string().regex(NAME_PATTERN, "must start with a letter and hold only letters, digits and _");
 const text = z.string().trim().min(1, "must not be empty");
 
@@ -85,7 +88,7 @@ export const approvalSchema = z.strictObject({
 
 export const rulesetSchema = z.strictObject({
   format: z.literal(RULESET_FORMAT),
-  id: z.string().regex(/^[a-z0-9][a-z0-9._-]*$/, "must be lower-case letters, digits, '.', '_' or '-'"),
+  id: z.string().regex(RULESET_ID_PATTERN, "must be lower-case letters, digits, '.', '_' or '-'"),
   title: text,
   standard: z.strictObject({ name: text, edition: text, clauses: z.string().optional() }),
   /** Design basis, e.g. "strength design (LRFD)". */

@@ -71,6 +71,36 @@ describe("compareRulesets", () => {
     expect(c.combinations.map((x) => [x.name, x.rowsOnlyBefore, x.rowsOnlyAfter])).toEqual([["3", ["D 1.2, L 1, S 1.6"], ["D 1.2, L 0.5, S 1.6"]]]);
   });
 
+  test("forms rows for parameters given, and says why it cannot where a parameter without default is not", () => {
+    const withSds = (sdsDefault?: number) => {
+      const f = base();
+      f.parameters = { SDS: sdsDefault === undefined ? { type: "number", description: "SDS" } : { type: "number", description: "SDS", default: sdsDefault } };
+      f.symbols = { ...f.symbols, E: { description: "earthquake", permanence: "transient", reversible: true } };
+      // ASCE/SEI 7-16 §2.3.6 (7) form [confirmed]: (0.9 − 0.2·SDS)D + ρQE, here with ρ = 1.
+      f.combinations = [{ id: "7", expression: "(0.9 - 0.2*SDS)D + E!", clause: "§2.3.6 (7)" }];
+      return load(f);
+    };
+    const unformed = compareRulesets(withSds(), withSds());
+    expect(unformed.rowProblems.before.map((p) => p.message)).toEqual(["parameter SDS has no default; give its value (SDS)"]);
+    expect(unformed.combinations).toEqual([]);
+    // A default changed from 1.0 to 1.5, text unchanged: 0.9 − 0.2·1.0 = 0.7 on D before, 0.9 − 0.2·1.5 = 0.6 after.
+    const changed = compareRulesets(withSds(1.0), withSds(1.5));
+    expect(changed.combinations.map((x) => [x.name, x.details, x.rowsOnlyBefore, x.rowsOnlyAfter])).toEqual([
+      ["7", ["the text is the same; the concrete rows differ (a symbol or a parameter changed)"], ["D 0.7, E 1", "D 0.7, E -1"], ["D 0.6, E 1", "D 0.6, E -1"]],
+    ]);
+    // A value given applies to each side that declares it: with SDS = 1.0 for both, the rows agree.
+    expect(compareRulesets(withSds(), withSds(1.5), { parameters: { SDS: 1.0 } }).combinations).toEqual([]);
+  });
+
+  test("lists notes added and removed rather than the whole list", () => {
+    const before = { ...base(), notes: ["kept", "old"] };
+    const after = { ...base(), notes: ["kept", "new"] };
+    expect(compareRulesets(load(before), load(after)).notes).toEqual([
+      { field: "note removed", before: "old", after: "" },
+      { field: "note added", before: "", after: "new" },
+    ]);
+  });
+
   test("lists added and removed combinations and symbols", () => {
     const after = base();
     after.combinations = [after.combinations[0], { id: "1", expression: "1.4D", clause: "§2.3.1 (1)" }];
@@ -101,9 +131,11 @@ describe("approveRuleset", () => {
   test("requires a name and a date written YYYY-MM-DD", () => {
     const r1 = approveRuleset(base(), "  ", "2026-11-30");
     const r2 = approveRuleset(base(), "A. Checker", "30/11/2026");
-    expect([r1, r2].map((r) => (r.ok ? "" : describeProblem(r.problems[0])))).toEqual([
+    const r3 = approveRuleset(base(), "A. Checker", "2026-02-30");
+    expect([r1, r2, r3].map((r) => (r.ok ? "" : describeProblem(r.problems[0])))).toEqual([
       "approval.approvedBy: give the name of the person approving",
       'approval.date: "30/11/2026" is not a date written YYYY-MM-DD',
+      'approval.date: "2026-02-30" is not a date written YYYY-MM-DD',
     ]);
   });
 

@@ -51,6 +51,11 @@ describe("loadRuleset", () => {
     ]);
   });
 
+  test("refuses a field written twice in one object, which JSON.parse would silently keep the last of", () => {
+    const text = '{"format": "loadwright-ruleset/1",\n "id": "a",\n "id": "b"}';
+    expect(problemsOf(text)).toEqual(['id: field "id" is written twice in one object (line 3, column 2); JSON keeps only the last, so say which is meant']);
+  });
+
   test("refuses an unknown field and suggests the one meant", () => {
     const file = base() as unknown as { symbols: { W: Record<string, unknown> } };
     file.symbols.W.reversable = true;
