@@ -11,7 +11,7 @@ import { parameterInput } from "../input/paramOption.js";
 import { chooseRuleset } from "../input/rulesetOption.js";
 import { jsonNumber, numberText } from "../output/cells.js";
 import { chooseFormat } from "../output/format.js";
-import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
+import { jsonHeader } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { delimiterOf, idColumnsOf, layoutOf, planOrFail, rowLimitOf, writePreamble, type Io, type RulesetOptions, withRowLimitHint } from "./common.js";
 
@@ -45,9 +45,7 @@ export async function combosCommand(options: CombosOptions, io: Io): Promise<voi
 
   if (format === "json") {
     const body = {
-      ruleset: rulesetJson(chosen),
-      parameters: parametersJson(plan),
-      cautions: CAUTIONS,
+      ...jsonHeader(chosen, plan),
       factorsOn: names,
       skipped: plan.combinations.filter((c) => c.skipped !== null).map((c) => ({ combination: c.combination.id, reason: c.skipped })),
       rows: listed.value.map((r) => ({

@@ -1,7 +1,7 @@
 /** `loadwright envelope FILE`: per component or result row, the largest and smallest value with the row that gives each. */
 import { envelopeOf } from "../../core/index.js";
 import { jsonNumber, numberText } from "../output/cells.js";
-import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
+import { streamedJsonStart } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
 import { resultsOf } from "./results.js";
@@ -14,7 +14,7 @@ export async function envelopeCommand(file: string, options: CaseOptions, io: Io
   const { out } = io;
 
   if (format === "json") {
-    out.line(`{"ruleset":${JSON.stringify(rulesetJson(chosen))},"parameters":${JSON.stringify(parametersJson(plan))},"cautions":${JSON.stringify(CAUTIONS)},"envelope":[`);
+    out.line(streamedJsonStart(chosen, plan, "envelope"));
     let first = true;
     for await (const r of resultsOf(input, "envelope")) {
       const e = envelopeOf(plan, r.id, r.values);

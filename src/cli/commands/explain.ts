@@ -8,7 +8,7 @@ import { describeProblem, explain, type CaseTable } from "../../core/index.js";
 import { distance } from "fastest-levenshtein";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { jsonNumber, numberText } from "../output/cells.js";
-import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
+import { jsonHeader } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
 
@@ -48,9 +48,7 @@ export async function explainCommand(file: string, options: ExplainOptions, io: 
 
   if (format === "json") {
     const body = {
-      ruleset: rulesetJson(chosen),
-      parameters: parametersJson(plan),
-      cautions: CAUTIONS,
+      ...jsonHeader(chosen, plan),
       explanation: {
         label: x.label,
         combination: x.combination,

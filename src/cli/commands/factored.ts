@@ -3,7 +3,7 @@ import { factored, type CaseTable } from "../../core/index.js";
 import { CliError } from "../cliError.js";
 import type { CaseInput } from "../input/caseInput.js";
 import { jsonNumber, numberText } from "../output/cells.js";
-import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
+import { jsonHeader } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { finiteOrFail, noRowsError, prepare, rowLimitOf, writePreamble, type CaseOptions, type Io, withRowLimitHint } from "./common.js";
 
@@ -20,9 +20,7 @@ export async function factoredCommand(file: string, options: CaseOptions & { row
 
   if (format === "json") {
     const body = {
-      ruleset: rulesetJson(chosen),
-      parameters: parametersJson(plan),
-      cautions: CAUTIONS,
+      ...jsonHeader(chosen, plan),
       components: table.components,
       rows: rows.value.map((r) => ({ label: r.label, combination: r.combination, values: r.values.map(jsonNumber) })),
     };

@@ -14,7 +14,7 @@ import { distance } from "fastest-levenshtein";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { openCases, type CaseStream } from "../input/caseInput.js";
 import { jsonNumber, numberText } from "../output/cells.js";
-import { CAUTIONS, parametersJson, rulesetJson } from "../output/preamble.js";
+import { jsonHeader, streamedJsonStart } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { delimiterOf, finiteOrFail, idColumnsOf, layoutOf, noRowsError, prepare, rowLimitOf, writePreamble, type CaseOptions, type Io, type Prepared, withRowLimitHint } from "./common.js";
 import { resultsOf } from "./results.js";
@@ -56,9 +56,7 @@ async function governingOfTable(file: string, prepared: Prepared, table: CaseTab
   await writePreamble(io, prepared);
   if (format === "json") {
     const body = {
-      ruleset: rulesetJson(chosen),
-      parameters: parametersJson(plan),
-      cautions: CAUTIONS,
+      ...jsonHeader(chosen, plan),
       rows: result.value.map((g) => ({
         criteria: g.criteria,
         label: g.label,
@@ -150,7 +148,7 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
   };
 
   if (format === "json") {
-    io.out.line(`{"ruleset":${JSON.stringify(rulesetJson(chosen))},"parameters":${JSON.stringify(parametersJson(plan))},"cautions":${JSON.stringify(CAUTIONS)},"rows":[`);
+    io.out.line(streamedJsonStart(chosen, plan, "rows"));
     for (let g = 0; g < rows.length; g++) {
       const row = rows[g];
       const head = { criteria: row.criteria, label: row.label, combination: plan.combinations[row.row.combination].combination.id };

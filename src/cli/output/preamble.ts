@@ -92,3 +92,13 @@ export function rulesetJson(chosen: ChosenRuleset) {
 export function parametersJson(plan: Plan) {
   return parametersInForce(plan).map((p) => ({ name: p.name, value: typeof p.value === "number" ? jsonNumber(p.value) : p.value, given: p.given }));
 }
+
+/** What opens every JSON output of a command on a case table: the ruleset, the parameters in force, the cautions. */
+export function jsonHeader(chosen: ChosenRuleset, plan: Plan) {
+  return { ruleset: rulesetJson(chosen), parameters: parametersJson(plan), cautions: CAUTIONS };
+}
+
+/** The same header opening a streamed JSON document, up to the named list that follows: `{"ruleset":…,"rows":[`. */
+export function streamedJsonStart(chosen: ChosenRuleset, plan: Plan, list: string): string {
+  return `${JSON.stringify(jsonHeader(chosen, plan)).slice(0, -1)},${JSON.stringify(list)}:[`;
+}
