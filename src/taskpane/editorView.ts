@@ -13,13 +13,13 @@ import { checkDraft, type DraftCheck, type EditorProblem } from "./draftCheck.js
 import type { Draft } from "./draftStore.js";
 import type { FormContext } from "./formFields.js";
 import { syntaxErrorSpot, type TextSpot } from "./jsonLocate.js";
-import { draftOfNew, newIdProblem } from "./openDraft.js";
+import { newIdField } from "./newIdField.js";
+import { draftOfNew } from "./openDraft.js";
 import type { PaneContext } from "./paneContext.js";
 import { placeProblems } from "./problemPlacement.js";
 import { rulesetForm } from "./rulesetForm.js";
 import { approvalLine, fromMemoryList, verificationBadge } from "./statusText.js";
 import { storeConflicts } from "./storeConflicts.js";
-import { takenIds } from "./takenIds.js";
 
 /** How long typing must pause before the draft is validated. */
 export const VALIDATE_AFTER_MS = 250;
@@ -84,25 +84,7 @@ function draftPicker(ctx: PaneContext, drafts: readonly Draft[]): HTMLElement {
 
 function newRulesetControl(ctx: PaneContext, open: boolean): HTMLElement {
   const { doc } = ctx;
-  const input = el(doc, "input", { id: "lw-new-id", type: "text", class: "mono", autocomplete: "off", spellcheck: "false", "aria-describedby": "lw-new-problem" }) as HTMLInputElement;
-  const problem = el(doc, "p", { id: "lw-new-problem", class: "field-problem", role: "alert" });
-  const start = () => {
-    const id = input.value.trim();
-    const why = newIdProblem(id, takenIds(ctx));
-    if (why) {
-      problem.textContent = why;
-      input.setAttribute("aria-invalid", "true");
-      input.focus();
-      return;
-    }
-    const draft = draftOfNew(id);
-    ctx.drafts.put(draft);
-    ctx.openDraft = draft.key;
-    ctx.show("editor");
-  };
-  input.addEventListener("keydown", (e) => {
-    if (e.key === "Enter") start();
-  });
+  const { input, problem, submit: start } = newIdField(ctx, { input: "lw-new-id", problem: "lw-new-problem" }, { class: "mono" }, draftOfNew);
   const details = el(
     doc,
     "details",

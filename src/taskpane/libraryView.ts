@@ -8,10 +8,10 @@ import type { LibraryEntry } from "../addin/rulesetLibrary.js";
 import { comboListOf } from "./comboList.js";
 import { button, el, uniqueId } from "./dom.js";
 import { exportButtons } from "./exportRuleset.js";
-import { draftOfCopy, draftOfStored, draftOfUnloadable, newIdProblem } from "./openDraft.js";
+import { newIdField } from "./newIdField.js";
+import { draftOfCopy, draftOfStored, draftOfUnloadable } from "./openDraft.js";
 import type { PaneContext } from "./paneContext.js";
 import { approvalBadge, fromMemoryList, sourceLine, verificationBadge } from "./statusText.js";
-import { takenIds } from "./takenIds.js";
 
 export function libraryView(ctx: PaneContext): HTMLElement {
   const { doc } = ctx;
@@ -161,25 +161,7 @@ function copyControl(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
   const { doc } = ctx;
   const inputId = uniqueId("lw-copy-id");
   const problemId = uniqueId("lw-copy-problem");
-  const input = el(doc, "input", { id: inputId, type: "text", autocomplete: "off", spellcheck: "false", value: `${entry.id}-firm`, "aria-describedby": problemId }) as HTMLInputElement;
-  const problem = el(doc, "p", { id: problemId, class: "field-problem", role: "alert" });
-  const open = () => {
-    const id = input.value.trim();
-    const why = newIdProblem(id, takenIds(ctx));
-    if (why) {
-      problem.textContent = why;
-      input.setAttribute("aria-invalid", "true");
-      input.focus();
-      return;
-    }
-    const draft = draftOfCopy(entry, id);
-    ctx.drafts.put(draft);
-    ctx.openDraft = draft.key;
-    ctx.show("editor");
-  };
-  input.addEventListener("keydown", (e) => {
-    if (e.key === "Enter") open();
-  });
+  const { input, problem, submit: open } = newIdField(ctx, { input: inputId, problem: problemId }, { value: `${entry.id}-firm` }, (id) => draftOfCopy(entry, id));
   const form = el(
     doc,
     "div",
