@@ -14,7 +14,7 @@ export class CliError extends Error {
   }
 }
 
-/** Exit statuses, documented in the README ("Command line"). */
+/** Exit statuses, documented in docs/command-line.md ("Errors and exit status"). */
 export const EXIT = {
   ok: 0,
   /** A file, ruleset, parameter or criterion is wrong. */

@@ -23,7 +23,7 @@ export { duplicateKeys, type DuplicateKey } from "./ruleset/jsonSyntax.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
 export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";
-export { rulesetStatus, VERIFICATION_TEXT, type RulesetStatus, type Verification, type Approval } from "./ruleset/status.js";
+export { rulesetStatus, combinationCoverage, VERIFICATION_TEXT, type RulesetStatus, type CombinationCoverage, type Verification, type Approval } from "./ruleset/status.js";
 export { NAME_PATTERN, RULESET_FORMAT, RULESET_ID_PATTERN, rulesetSchema, type RulesetFile } from "./ruleset/schema.js";
 export type { Ruleset, LoadSymbol, Parameter, Combination, CaseMode } from "./ruleset/model.js";
 export { compareRulesets, rowsById, type CompareOptions, type RulesetComparison, type EntryDifference, type CombinationDifference, type FieldDifference } from "./ruleset/compareRulesets.js";

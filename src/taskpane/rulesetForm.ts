@@ -10,7 +10,7 @@ import { isObject, renameKey, shownText, type JsonObject } from "./dataPath.js";
 import { button, el } from "./dom.js";
 import { entryButton, fieldShell, numberField, optionOf, parsedField, selectField, textField, type FormContext } from "./formFields.js";
 
-/** The file format's rule for symbol, parameter and value names (README, "Rulesets"). */
+/** The file format's rule for symbol, parameter and value names (docs/rulesets.md, "Rulesets"). */
 
 export function rulesetForm(fc: FormContext): HTMLElement {
   const { doc } = fc;

@@ -119,7 +119,7 @@ describe("the JSON contract", () => {
       expect(run.status, args.join(" ")).toBe(0);
       const body = JSON.parse(run.stdout);
       expect(body.ruleset).toMatchObject({ id: "test-fixture-strength", version: "0.0.1", status: "unverified" });
-      // The fingerprint is SHA-256 (README, "Rulesets"): 64 hex digits.
+      // The fingerprint is SHA-256 (docs/rulesets.md, "Rulesets"): 64 hex digits.
       expect(body.ruleset.fingerprint).toMatch(/^[0-9a-f]{64}$/);
       expect(body.cautions).toHaveLength(3);
     }
@@ -271,7 +271,7 @@ describe("loadwright rulesets", () => {
     const run = await loadwright(["rulesets", "--format", "json"]);
     expect(run.status).toBe(0);
     const listed = JSON.parse(run.stdout).rulesets as { id: string; status: string; fingerprint: string }[];
-    // README, "Rulesets": any provenance entry marked from-memory makes a ruleset UNVERIFIED.
+    // docs/rulesets.md, "Rulesets": any provenance entry marked from-memory makes a ruleset UNVERIFIED.
     const files = readdirSync(join(ROOT, "rulesets"))
       .filter((f) => f.endsWith(".json"))
       .map((f) => JSON.parse(readFileSync(join(ROOT, "rulesets", f), "utf8")) as { id: string; provenance: { status: string }[] });

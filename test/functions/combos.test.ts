@@ -46,7 +46,7 @@ describe("LW.COMBOS", () => {
   test("gives factors per case when a row of case headers is given", () => {
     const table = value(evaluateFormula(COMBOS, [[["test-seismic"]], [["SDS=1.1; rho=1.0"]], [["", "D", "E:x", "E:y"]]]));
     expect(table[1]).toEqual(["combination row", "clause", "D", "E:x", "E:y"]);
-    // Transient cases act one at a time (README, "Case tables"): each E direction in turn, both ways.
+    // Transient cases act one at a time (docs/case-tables.md): each E direction in turn, both ways.
     expect(factor(table, "7: 0.68D + E:y", "E:y")).toBe(1);
     expect(factor(table, "7: 0.68D + E:y", "E:x")).toBe(0);
     // Combination 7: E:x or E:y, each both ways: 4 rows.

@@ -11,7 +11,7 @@ import { SEISMIC_FIXTURE, STRENGTH_FIXTURE, STRENGTH_ROWS } from "./fixtures.js"
 import { message, rowOf, value } from "./outcome.js";
 
 /**
- * The fingerprint as README "Rulesets" defines it, computed here with Node's own
+ * The fingerprint as docs/rulesets.md, "Rulesets" defines it, computed here with Node's own
  * SHA-256 and the RFC 8785 canonicalization library, not with Loadwright's code.
  */
 function referenceFingerprint(file: RulesetFile): string {

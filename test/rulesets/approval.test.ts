@@ -1,7 +1,7 @@
 /**
  * A firm's approval of its copy of a shipped ruleset: who, when, and the fingerprint
  * of what they approved. The fingerprint is checked against an independent reading
- * of its definition (README, "Rulesets"): SHA-256, by Node's crypto module, of the
+ * of its definition (docs/rulesets.md, "Rulesets"): SHA-256, by Node's crypto module, of the
  * RFC 8785 canonical JSON without the approval block, written out here by hand.
  */
 import { createHash } from "node:crypto";

@@ -1,7 +1,7 @@
 /**
  * A ruleset's fingerprint computed apart from the engine: SHA-256 (Node's
  * crypto) of the RFC 8785 canonical JSON (the canonicalize reference library)
- * without the approval block, as README "Rulesets" defines it.
+ * without the approval block, as docs/rulesets.md, "Rulesets" defines it.
  */
 import { createHash } from "node:crypto";
 import canonicalize from "canonicalize";

@@ -78,7 +78,7 @@ describe("importing", () => {
     await pane.page.locator("#lw-import-store").click();
     const item = pane.page.locator('#lw-rulesets li[data-ruleset-id="test-strength"]');
     await item.waitFor();
-    // The fixture's one provenance source is marked confirmed: README "Rulesets" — no from-memory source, so Checked.
+    // The fixture's one provenance source is marked confirmed: docs/rulesets.md, "Rulesets" — no from-memory source, so Checked.
     expect(await item.locator("[data-verification]").textContent()).toBe("Checked");
     expect(await item.locator(".fingerprint").textContent()).toBe(independentFingerprint(STRENGTH_FIXTURE).slice(0, 12));
     expect((await storedFiles(pane.page)).find((f) => f.id === "test-strength")).toEqual(STRENGTH_FIXTURE);
@@ -120,7 +120,7 @@ describe("stored copies of shipped rulesets", () => {
   test("approving a checked shipped ruleset stores an approved copy with the same content, and needs no from-memory confirmation", async () => {
     const id = "en1990-str-6.10";
     const shipped = findShippedRuleset(id)!.ruleset.file;
-    // Its provenance has no from-memory source (README "Shipped rulesets": checked).
+    // Its provenance has no from-memory source (docs/shipped-rulesets.md: checked).
     expect(shipped.provenance.every((p) => p.status === "confirmed")).toBe(true);
     await showView(pane.page, "library");
     await pane.page.locator(`#lw-rulesets li[data-ruleset-id="${id}"] button.ruleset`).click();

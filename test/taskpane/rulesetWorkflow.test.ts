@@ -45,11 +45,11 @@ describe("the library", () => {
       const file = ruleset.file;
       const item = entry(file.id);
       const fromMemory = file.provenance.some((p) => p.status === "from-memory");
-      // README "Rulesets": any from-memory source marks a ruleset UNVERIFIED; shipped rulesets carry an empty approval block.
+      // docs/rulesets.md, "Rulesets": any from-memory source marks a ruleset UNVERIFIED; shipped rulesets carry an empty approval block.
       expect(await item.locator("[data-verification]").textContent(), file.id).toBe(fromMemory ? "⚠ UNVERIFIED" : "Checked");
       expect(await item.locator("[data-approval]").textContent(), file.id).toBe("not approved");
       expect(await item.locator(".entry-source").textContent(), file.id).toBe("shipped with Loadwright");
-      // README "Rulesets": the fingerprint is the SHA-256 of the canonical JSON (RFC 8785) without the approval block; the pane shows 12 digits.
+      // docs/rulesets.md, "Rulesets": the fingerprint is the SHA-256 of the canonical JSON (RFC 8785) without the approval block; the pane shows 12 digits.
       expect(await item.locator(".fingerprint").textContent(), file.id).toBe(independentFingerprint(file).slice(0, 12));
     }
     await screenshot(pane.page, "library");

@@ -61,7 +61,7 @@ async function main(): Promise<void> {
   writeFileSync(out, workbook);
   process.stdout.write(
     `\nWrote ${out}: the case table and live LW.ENVELOPE, LW.GOVERNING, LW.COMBOS, LW.EXPLAIN and LW.RULESET formulas.\n` +
-      "Open it in Excel with the Loadwright add-in loaded (README, \"Demo\"); without the add-in the formulas show #NAME?.\n",
+      "Open it in Excel with the Loadwright add-in loaded (docs/demo.md); without the add-in the formulas show #NAME?.\n",
   );
 }
 

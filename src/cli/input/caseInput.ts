@@ -78,7 +78,7 @@ export async function openCases(file: string, ruleset: Ruleset, options: CaseFil
   const totalBytes = checkReadable(file, "case file");
   const reader = readCsv(file, { delimiter: options.delimiter });
   const first = await firstRecord(reader);
-  if (!first) throw new CliError(`${file}: the file is empty; a case file starts with a header row (README, "Case tables")`);
+  if (!first) throw new CliError(`${file}: the file is empty; a case file starts with a header row (docs/case-tables.md)`);
   const lastNamed = lastNonBlank(first.cells);
   const reads = (cell: Cell) => !("error" in symbolOfHeader(cellText(cell), ruleset, options.map));
 

@@ -1,4 +1,4 @@
-/** `--map FILE`: a CSV of two-cell rows, [header, symbol] or [symbol, sum|each|orthogonal] (README, "Case tables"). */
+/** `--map FILE`: a CSV of two-cell rows, [header, symbol] or [symbol, sum|each|orthogonal] (docs/case-tables.md). */
 import { EMPTY_CASE_MAP, readCaseMap, type CaseMap, type Cell, type Ruleset } from "../../core/index.js";
 import { CliError } from "../cliError.js";
 import { problemsInFile } from "./caseInput.js";

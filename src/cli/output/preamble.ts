@@ -73,7 +73,7 @@ export function preambleLines(chosen: ChosenRuleset | null, plan: Plan | null, f
   return [...identity, ...cautions].map((l) => `loadwright: ${l}`);
 }
 
-/** The `ruleset` object of every JSON output (README, "JSON output"). */
+/** The `ruleset` object of every JSON output (docs/command-line.md, "JSON output"). */
 export function rulesetJson(chosen: ChosenRuleset) {
   const { file } = chosen.ruleset;
   return {

@@ -182,6 +182,15 @@ export function buildRuleset(file: RulesetFile, origin: Ruleset["origin"] = "fil
     combinations.push(combination);
   });
 
+  file.provenance.forEach((entry, index) => {
+    entry.combinations?.forEach((id, k) => {
+      if (!seenIds.has(id)) {
+        const known = [...seenIds.keys()].join(", ");
+        problems.push(problem("ruleset-field", `names combination "${id}", which this ruleset does not have (combinations: ${known})`, { path: ["provenance", index, "combinations", k] }));
+      }
+    });
+  });
+
   if (problems.length > 0) return fail(...problems);
   return ok({
     file,

@@ -70,10 +70,17 @@ export const combinationSchema = z.strictObject({
 export const provenanceSchema = z.strictObject({
   /** The published source, with edition and clause or page. */
   source: text,
+  /**
+   * Where a checker finds it: title, issuing body, web address or document
+   * number, and the clause it quotes. Every shipped "confirmed" entry has one.
+   */
+  locator: text.optional(),
   /** "confirmed": checked against the source; "from-memory": recalled, to be verified. */
   status: z.enum(["confirmed", "from-memory"]),
-  /** Which parts of the ruleset this source covers. */
+  /** Which parts of the ruleset this source covers, in words. */
   covers: text,
+  /** The ids of the combinations this source vouches for (or, if from memory, leaves open). */
+  combinations: z.array(text).optional(),
   note: z.string().optional(),
 });
 

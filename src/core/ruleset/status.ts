@@ -18,6 +18,31 @@ export interface RulesetStatus {
   summary: string;
   /** The sources marked "from-memory", for the warning text. */
   fromMemory: string[];
+  /** How many combinations a confirmed source vouches for and none leaves open from memory. */
+  combinations: CombinationCoverage;
+}
+
+export interface CombinationCoverage {
+  total: number;
+  confirmed: number;
+  /** Ids of the combinations not confirmed, in ruleset order. */
+  unconfirmed: string[];
+}
+
+/**
+ * A combination is confirmed when a confirmed provenance entry lists it and no
+ * from-memory entry does; a ruleset typed in cells confirms none.
+ */
+export function combinationCoverage(ruleset: Ruleset): CombinationCoverage {
+  const ids = ruleset.combinations.map((c) => c.id);
+  if (ruleset.origin === "cells") return { total: ids.length, confirmed: 0, unconfirmed: ids };
+  const confirmed = new Set<string>();
+  const open = new Set<string>();
+  for (const entry of ruleset.file.provenance) {
+    for (const id of entry.combinations ?? []) (entry.status === "confirmed" ? confirmed : open).add(id);
+  }
+  const unconfirmed = ids.filter((id) => !confirmed.has(id) || open.has(id));
+  return { total: ids.length, confirmed: ids.length - unconfirmed.length, unconfirmed };
 }
 
 export const VERIFICATION_TEXT: Record<Verification, string> = {
@@ -46,5 +71,6 @@ export function rulesetStatus(ruleset: Ruleset): RulesetStatus {
     shortFingerprint: shortFingerprint(fingerprint),
     summary: `${VERIFICATION_TEXT[verification]}; ${approvalText}`,
     fromMemory,
+    combinations: combinationCoverage(ruleset),
   };
 }

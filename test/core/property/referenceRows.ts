@@ -1,5 +1,5 @@
 /**
- * A second, deliberately plain reading of the combination semantics (README,
+ * A second, deliberately plain reading of the combination semantics (docs/rulesets.md,
  * "How concrete rows are formed"), written for the property tests only: it
  * enumerates every concrete row as a factor vector by brute force, straight
  * from the parsed expression, sharing nothing with src/core/plan or

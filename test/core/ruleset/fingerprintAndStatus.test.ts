@@ -80,6 +80,28 @@ describe("rulesetStatus", () => {
     expect(rulesetStatus(typed.value).verification).toBe("user");
   });
 
+  test("counts a combination as confirmed only where a confirmed source lists it and no from-memory one does", () => {
+    const file = tiny();
+    file.combinations.push({ id: "2", expression: "1.2D", clause: "c" }, { id: "3", expression: "0.9D", clause: "c" });
+    file.provenance = [
+      { source: "public text", locator: "a title, a body, an address, a clause", status: "confirmed", covers: "1 and 2", combinations: ["1", "2"] },
+      { source: "recalled", status: "from-memory", covers: "the numbering of 2", combinations: ["2"] },
+    ];
+    // 1: confirmed only; 2: confirmed but left open by a from-memory entry; 3: named by no source.
+    expect(rulesetStatus(loaded(file)).combinations).toEqual({ total: 3, confirmed: 1, unconfirmed: ["2", "3"] });
+  });
+
+  test("refuses a provenance entry that names a combination the ruleset does not have", () => {
+    const file = tiny();
+    file.provenance[0].combinations = ["1", "9"];
+    const result = loadRuleset(file);
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.problems.map((p) => [p.place.path, p.message])).toEqual([
+      [["provenance", 0, "combinations", 1], 'names combination "9", which this ruleset does not have (combinations: 1)'],
+    ]);
+  });
+
   test("gives a 12-digit short fingerprint for a calculation stamp", () => {
     const status = rulesetStatus(loaded(tiny()));
     expect(status.shortFingerprint).toBe(status.fingerprint.slice(0, 12));
