@@ -12,21 +12,22 @@ import { allRows, planWith } from "./factorRows.js";
 const ROOT = fileURLToPath(new URL("../../", import.meta.url));
 
 /**
- * The status each ruleset must have, from its sources in shared/REFERENCES.md: "checked" only where
- * every factor and rule it uses is marked [confirmed] there.
+ * The status each ruleset must have, from the public sources its provenance names (docs/verification.md):
+ * "checked" only where every factor and rule it uses is confirmed by one.
  */
 const EXPECTED: Record<string, { status: "checked" | "unverified"; citation: string }> = {
-  // Eh = ρ·QE, the F rule carried to the 7-16 numbering, H out of 1.4D: [memory].
+  // ASCE/SEI 7-16: only the 7-10 text of §2.3.2 and §2.4.1 and a permit document applying §2.3.6 were
+  // found; the 7-16 lists, the F and H rules and the numbering stay from memory.
   "asce7-16-strength": { status: "unverified", citation: "ASCE/SEI 7-16 §2.3." },
   "asce7-16-strength-overstrength": { status: "unverified", citation: "ASCE/SEI 7-16 §2.3." },
-  // §2.4.5 seismic combinations and the ASD rules on F and H: [memory].
   "asce7-16-asd": { status: "unverified", citation: "ASCE/SEI 7-16 §2.4." },
   "asce7-16-asd-overstrength": { status: "unverified", citation: "ASCE/SEI 7-16 §2.4." },
-  // ASCE/SEI 7-22: "NOT confirmed; verify before shipping as anything but 'from memory'".
+  // ASCE/SEI 7-22: STRUCTURE magazine confirms 1.0S in strength design and ASD combinations 3a, 4a, 6a; the rest is from memory.
   "asce7-22-strength": { status: "unverified", citation: "ASCE/SEI 7-22 §2.3." },
   "asce7-22-asd": { status: "unverified", citation: "ASCE/SEI 7-22 §2.4." },
-  // IBC 2018: only f1 and f2 confirmed.
+  // IBC 2018: the equations are printed in IBC 2012- and 2015-based codes; no 2018 text printing them was found.
   "ibc2018-strength": { status: "unverified", citation: "IBC 2018 §1605.2, Equation 16-" },
+  "ibc2018-asd": { status: "unverified", citation: "IBC 2018 §1605.3.1, Equation 16-" },
   // EN 1990 Table A1.1, A1.2(A)–(C), expressions 6.10, 6.14b, 6.15b: [confirmed].
   "en1990-str-6.10": { status: "checked", citation: "EN 1990 (6.10)" },
   // ξ on γG,sup only: [memory].

@@ -11,6 +11,7 @@ import asce716AsdOverstrength from "../../../rulesets/asce7-16-asd-overstrength.
 import asce722Strength from "../../../rulesets/asce7-22-strength.json" with { type: "json" };
 import asce722Asd from "../../../rulesets/asce7-22-asd.json" with { type: "json" };
 import ibc2018Strength from "../../../rulesets/ibc2018-strength.json" with { type: "json" };
+import ibc2018Asd from "../../../rulesets/ibc2018-asd.json" with { type: "json" };
 import en1990Str610 from "../../../rulesets/en1990-str-6.10.json" with { type: "json" };
 import en1990Str610ab from "../../../rulesets/en1990-str-6.10ab.json" with { type: "json" };
 import en1990Equ from "../../../rulesets/en1990-equ.json" with { type: "json" };
@@ -31,6 +32,7 @@ export const SHIPPED_RULESET_FILES: readonly unknown[] = [
   asce722Strength,
   asce722Asd,
   ibc2018Strength,
+  ibc2018Asd,
   en1990Str610,
   en1990Str610ab,
   en1990Equ,
