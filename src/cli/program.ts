@@ -55,10 +55,14 @@ export function buildProgram(io: Io): Command {
 
   program
     .command("rulesets")
-    .description("list the shipped rulesets with their verification status and fingerprint")
+    .description("list the shipped rulesets with their verification status, confirmed combinations and fingerprint")
     .addOption(new Option("-f, --format <format>", "output format: table, csv, json or md"))
-    .addHelpText("after", `\nExamples:\n  loadwright rulesets\n  loadwright rulesets --format json\n${CAUTION_HELP}`)
-    .action((options: { format?: string }) => rulesetsCommand(options, io));
+    .option("--verification", "per ruleset and per combination: the public sources that confirm it and what is from memory")
+    .addHelpText(
+      "after",
+      `\nExamples:\n  loadwright rulesets\n  loadwright rulesets --format json\n  loadwright rulesets --verification\n  loadwright rulesets --verification --format md > docs/verification.md\n${CAUTION_HELP}`,
+    )
+    .action((options: { format?: string; verification?: boolean }) => rulesetsCommand(options, io));
 
   caseOptions(
     rulesetOptions(

@@ -295,6 +295,124 @@ describe("loadwright rulesets", () => {
   });
 });
 
+describe("loadwright rulesets: what public sources confirm", () => {
+  interface Entry {
+    source: string;
+    locator?: string;
+    status: string;
+    covers: string;
+    combinations?: string[];
+  }
+  interface RulesetText {
+    id: string;
+    combinations: { id: string; clause: string }[];
+    provenance: Entry[];
+  }
+  // Read from the files themselves, by the rule of docs/rulesets.md: a combination counts as confirmed
+  // where a confirmed entry lists it and no from-memory entry does.
+  const files = readdirSync(join(ROOT, "rulesets"))
+    .filter((f) => f.endsWith(".json"))
+    .map((f) => JSON.parse(readFileSync(join(ROOT, "rulesets", f), "utf8")) as RulesetText);
+  const naming = (file: RulesetText, status: string, id: string) =>
+    file.provenance.flatMap((p, i) => (p.status === status && (p.combinations ?? []).includes(id) ? [i + 1] : []));
+  const confirmedIds = (file: RulesetText) => file.combinations.map((c) => c.id).filter((id) => naming(file, "confirmed", id).length > 0 && naming(file, "from-memory", id).length === 0);
+  const fromMemory = (file: RulesetText) => file.provenance.filter((p) => p.status === "from-memory");
+
+  test("counts in JSON the combinations confirmed and lists what is from memory, keeping the ruleset fields", async () => {
+    const run = await loadwright(["rulesets", "--format", "json"]);
+    expect(run.status).toBe(0);
+    const listed = JSON.parse(run.stdout).rulesets as { id: string; status: string; fingerprint: string; confirmed: number; combinations: number; fromMemory: { source: string; covers: string; combinations: string[] }[] }[];
+    for (const file of files) {
+      const entry = listed.find((r) => r.id === file.id);
+      expect(entry?.confirmed, file.id).toBe(confirmedIds(file).length);
+      expect(entry?.combinations, file.id).toBe(file.combinations.length);
+      expect(entry?.fromMemory, file.id).toEqual(fromMemory(file).map((p) => ({ source: p.source, covers: p.covers, combinations: p.combinations ?? [] })));
+      expect(Object.keys(entry ?? {}).slice(0, 9)).toEqual(["id", "title", "standard", "version", "fingerprint", "status", "approval", "summary", "source"]);
+    }
+  });
+
+  test("shows the count in the table and lists what is from memory below it", async () => {
+    const run = await loadwright(["rulesets", "--format", "table"]);
+    expect(run.status).toBe(0);
+    for (const file of files) {
+      expect(run.stdout).toMatch(new RegExp(`^${file.id.replace(/\./g, "\\.")}\\s.*\\s${confirmedIds(file).length} of ${file.combinations.length} confirmed$`, "m"));
+      for (const p of fromMemory(file)) expect(run.stdout).toContain(`- ${file.id}: ${p.covers}`);
+    }
+  });
+
+  test("gives the count and what is from memory as CSV columns", async () => {
+    const run = await loadwright(["rulesets", "--format", "csv"]);
+    expect(run.status).toBe(0);
+    const rows = csvRows(run.stdout);
+    expect(rows[0]).toEqual(["id", "version", "status", "standard", "title", "approval", "fingerprint", "combinations", "from memory"]);
+    for (const file of files) {
+      const row = rows.find((r) => r[0] === file.id) as string[];
+      expect(row[7]).toBe(`${confirmedIds(file).length} of ${file.combinations.length} confirmed`);
+      expect(row[8]).toBe(fromMemory(file).map((p) => p.covers).join(" | "));
+    }
+  });
+
+  test("--verification names per combination the sources that confirm it and those that leave it open", async () => {
+    const run = await loadwright(["rulesets", "--verification", "--format", "json"]);
+    expect(run.status).toBe(0);
+    const listed = JSON.parse(run.stdout).rulesets as {
+      id: string;
+      provenance: { ref: number; status: string; source: string; locator?: string }[];
+      verification: { combination: string; clause: string; confirmed: boolean; confirmedBy: number[]; openBy: number[] }[];
+    }[];
+    expect(listed.map((r) => r.id).sort()).toEqual(files.map((f) => f.id).sort());
+    for (const file of files) {
+      const entry = listed.find((r) => r.id === file.id);
+      expect(entry?.provenance.map((p) => [p.ref, p.status, p.source, p.locator])).toEqual(file.provenance.map((p, i) => [i + 1, p.status, p.source, p.locator]));
+      expect(entry?.verification).toEqual(
+        file.combinations.map((c) => ({
+          combination: c.id,
+          clause: c.clause,
+          confirmed: confirmedIds(file).includes(c.id),
+          confirmedBy: naming(file, "confirmed", c.id),
+          openBy: naming(file, "from-memory", c.id),
+        })),
+      );
+    }
+    expect(run.stderr).toMatch(/loadwright: Caution: Results must be reviewed by a qualified, licensed engineer/);
+  });
+
+  test("--verification as CSV has one row per combination of every ruleset", async () => {
+    const run = await loadwright(["rulesets", "--verification", "--format", "csv"]);
+    expect(run.status).toBe(0);
+    const rows = csvRows(run.stdout);
+    expect(rows[0]).toEqual(["ruleset", "status", "combination", "clause", "confirmed", "confirmed by", "left open from memory"]);
+    expect(rows.slice(1).map((r) => `${r[0]} ${r[2]}`).sort()).toEqual(files.flatMap((f) => f.combinations.map((c) => `${f.id} ${c.id}`)).sort());
+    for (const file of files) {
+      for (const c of file.combinations) {
+        const row = rows.find((r) => r[0] === file.id && r[2] === c.id) as string[];
+        expect(row[4]).toBe(confirmedIds(file).includes(c.id) ? "yes" : "no");
+        expect(row[6]).toBe(naming(file, "from-memory", c.id).map((i) => file.provenance[i - 1].covers).join(" | "));
+      }
+    }
+  });
+
+  test("--verification as a table gives each ruleset its combinations, sources and locators", async () => {
+    const run = await loadwright(["rulesets", "--verification", "--format", "table"]);
+    expect(run.status).toBe(0);
+    expect(run.stdout).toMatch(/^Caution: Results must be reviewed by a qualified, licensed engineer/);
+    for (const file of files) {
+      expect(run.stdout).toContain(`\n${file.id}: `);
+      file.provenance.forEach((p, i) => {
+        if (p.status === "confirmed") expect(run.stdout).toContain(`  [${i + 1}] confirmed: ${p.source} — ${p.locator ?? "no locator given"}`);
+        else expect(run.stdout).toContain(`  [${i + 1}] FROM MEMORY: ${p.source}`);
+      });
+    }
+  });
+
+  test("docs/verification.md is the --verification report in Markdown, word for word", async () => {
+    // After a change to a ruleset: loadwright rulesets --verification --format md > docs/verification.md
+    const run = await loadwright(["rulesets", "--verification", "--format", "md"]);
+    expect(run.status).toBe(0);
+    expect(run.stdout).toBe(readFileSync(join(ROOT, "docs/verification.md"), "utf8"));
+  });
+});
+
 describe("help", () => {
   test.each(["rulesets", "combos", "factored", "envelope", "governing", "explain"])("loadwright %s --help shows examples and the cautions", async (command) => {
     const run = await loadwright([command, "--help"]);
