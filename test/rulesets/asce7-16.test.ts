@@ -76,7 +76,7 @@ const ASD: FactorRow[] = [
 ];
 
 const ASD_OVERSTRENGTH: FactorRow[] = [
-  row("8 (Ω0)", { D: 1.0 + 0.14 * SDS, E: 0.7 * OMEGA0 }), // (8) with Emh = Ω0·QE [memory]; [EV] applies Ω0 so
+  row("8 (Ω0)", { D: 1.0 + 0.14 * SDS, E: 0.7 * OMEGA0 }), // (8) with Emh = Ω0·QE [memory]; [EV] applies Ω0 in the same place
   row("9 (Ω0)", { D: 1.0 + 0.105 * SDS, E: 0.525 * OMEGA0, L: 0.75, S: 0.75 }), // (9) with Emh [memory]; [EV]
   row("10 (Ω0)", { D: 0.6 - 0.14 * SDS, E: 0.7 * OMEGA0 }), // (10) with Emh [memory]; [EV]
 ];
