@@ -154,7 +154,9 @@ describe("stored copies of shipped rulesets", () => {
     await pane.page.locator("#lw-approver").fill("B. Reviewer");
     await pane.page.locator("#lw-approve-date").fill("2026-03-31");
     await pane.page.locator("#lw-approve-button").click();
-    await item.locator('[data-approval="approved"]').waitFor({ state: "attached" });
+    await pane.page.waitForSelector('#lw-approve-status [data-approval="approved"]');
+    await showView(pane.page, "library");
+    expect(await item.locator("[data-approval]").textContent()).toBe("approved by B. Reviewer on 2026-03-31");
     const stored = (await storedFiles(pane.page)).find((f) => f.id === id)!;
     expect(stored.approval.fingerprint).toBe(independentFingerprint({ ...STRENGTH_FIXTURE, id }));
   });
