@@ -75,7 +75,7 @@ describe("nbcc2020-uls row counts", () => {
     // Every term acting (D at 1.25 or 0.9 in cases 2–4):
     //   1: 1
     //   2: D 2 × 1.5L × (1.0S | 8 × 0.4W) 9 = 18
-    //   3: D 2 × 1.5S × (1.0L | 8 × 0.4W) 9 = 18
+    //   3: D 2 × 1.5S × ((cL + 0.5)L | 8 × 0.4W) 9 = 18
     //   4: D 2 × 8 W × (0.5L | 0.5S) 2 = 32
     //   5: 8 E (with 0.5L + 0.25S) = 8                       → 77
     // With absent variants:

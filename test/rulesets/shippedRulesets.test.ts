@@ -28,23 +28,27 @@ const EXPECTED: Record<string, { status: "checked" | "unverified"; citation: str
   // IBC 2018: the equations are printed in IBC 2012- and 2015-based codes; no 2018 text printing them was found.
   "ibc2018-strength": { status: "unverified", citation: "IBC 2018 §1605.2, Equation 16-" },
   "ibc2018-asd": { status: "unverified", citation: "IBC 2018 §1605.3.1, Equation 16-" },
-  // EN 1990 Table A1.1, A1.2(A)–(C), expressions 6.10, 6.14b, 6.15b: [confirmed].
-  "en1990-str-6.10": { status: "checked", citation: "EN 1990 (6.10)" },
-  // ξ on γG,sup only: [memory].
+  // EN 1990: expressions 6.10–6.16b, Table A1.2(A)–(C) and the ψ2 of Annex A1 are confirmed by public design guides
+  // (their provenance names them); ψ0 of imposed-load categories other than B and H, of snow above 1000 m or in the
+  // Nordic countries and of temperature are from memory, so every ruleset that uses ψ0 is UNVERIFIED.
+  "en1990-str-6.10": { status: "unverified", citation: "EN 1990 (6.10)" },
+  // … and ξ on γG,sup only: [memory].
   "en1990-str-6.10ab": { status: "unverified", citation: "EN 1990 (6.10" },
-  "en1990-equ": { status: "checked", citation: "EN 1990 (6.10) with Table A1.2(A)" },
-  "en1990-geo-set-c": { status: "checked", citation: "EN 1990 (6.10) with Table A1.2(C)" },
-  "en1990-sls-characteristic": { status: "checked", citation: "EN 1990 (6.14b)" },
-  "en1990-sls-frequent": { status: "checked", citation: "EN 1990 (6.15b)" },
-  // 6.16b: [memory].
+  "en1990-equ": { status: "unverified", citation: "EN 1990 (6.10) with Table A1.2(A)" },
+  "en1990-geo-set-c": { status: "unverified", citation: "EN 1990 (6.10) with Table A1.2(C)" },
+  "en1990-sls-characteristic": { status: "unverified", citation: "EN 1990 (6.14b)" },
+  // ψ1 of the imposed-load categories and of temperature, ψ2 of roofs: [memory].
+  "en1990-sls-frequent": { status: "unverified", citation: "EN 1990 (6.15b)" },
+  // ψ2 of roofs (category H): [memory].
   "en1990-sls-quasi-permanent": { status: "unverified", citation: "EN 1990 (6.16b)" },
-  // 6.11b apart from the ψ1 or ψ2 choice: [memory].
+  // ψ1 of the imposed-load categories and of temperature, ψ2 of roofs: [memory].
   "en1990-accidental": { status: "unverified", citation: "EN 1990 (6.11b)" },
-  // 6.12b [confirmed], but the 100 % + 30 % default from EN 1998-1: [memory].
+  // ψ2 of roofs and the 100 % + 30 % default from EN 1998-1: [memory].
   "en1990-seismic": { status: "unverified", citation: "EN 1990 (6.12b)" },
-  // NBCC 2020 factors: [memory].
+  // Table 4.1.3.2.-A factors: [memory]; the Article 4.1.3.2. rules confirmed in a provincial code's 2015-aligned text.
   "nbcc2020-uls": { status: "unverified", citation: "NBCC 2020 Table 4.1.3.2.-A, load case " },
-  // AS/NZS 1170.0: [memory only].
+  // AS/NZS 1170.0: the forms of (b), (d), (e) confirmed by an association design manual; lettering, (a), (c), (f),
+  // (g) and Table 4.1: [memory].
   "asnzs1170-strength": { status: "unverified", citation: "AS/NZS 1170.0:2002 §4.2.2 (" },
 };
 

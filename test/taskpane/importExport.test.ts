@@ -117,17 +117,17 @@ describe("exporting", () => {
 });
 
 describe("stored copies of shipped rulesets", () => {
-  test("approving a checked shipped ruleset stores an approved copy with the same content, and needs no from-memory confirmation", async () => {
+  test("approving a shipped ruleset stores an approved copy with the same content, once its from-memory parts are confirmed", async () => {
     const id = "en1990-str-6.10";
     const shipped = findShippedRuleset(id)!.ruleset.file;
-    // Its provenance has no from-memory source (docs/shipped-rulesets.md: checked).
-    expect(shipped.provenance.every((p) => p.status === "confirmed")).toBe(true);
+    // Its provenance has a from-memory source (docs/shipped-rulesets.md: UNVERIFIED), so the approver confirms it.
+    expect(shipped.provenance.some((p) => p.status === "from-memory")).toBe(true);
     await showView(pane.page, "library");
     await pane.page.locator(`#lw-rulesets li[data-ruleset-id="${id}"] button.ruleset`).click();
     await showView(pane.page, "approve");
-    expect(await pane.page.locator("#lw-approve-memory").count()).toBe(0);
     await pane.page.locator("#lw-approver").fill("B. Reviewer");
     await pane.page.locator("#lw-approve-date").fill("2026-03-31");
+    await pane.page.locator("#lw-approve-memory").check();
     await pane.page.locator("#lw-approve-button").click();
     await pane.page.waitForSelector('#lw-approve-status [data-approval="approved"]');
     await showView(pane.page, "library");
@@ -137,6 +137,28 @@ describe("stored copies of shipped rulesets", () => {
     expect(await item.locator("[data-approval]").textContent()).toBe("approved by B. Reviewer on 2026-03-31");
     const stored = (await storedFiles(pane.page)).find((f) => f.id === id)!;
     expect(stored.approval.fingerprint).toBe(independentFingerprint(shipped));
+  });
+
+  test("approving a checked ruleset needs no from-memory confirmation", async () => {
+    const id = "test-strength-approved";
+    // The fixture's one provenance source is confirmed (docs/rulesets.md, "Rulesets": so Checked).
+    await importText(JSON.stringify({ ...STRENGTH_FIXTURE, id }));
+    await pane.page.waitForSelector("#lw-import-ok");
+    await pane.page.locator("#lw-import-store").click();
+    const item = pane.page.locator(`#lw-rulesets li[data-ruleset-id="${id}"]`);
+    await item.waitFor();
+    await item.locator("button.ruleset").click();
+    await showView(pane.page, "approve");
+    expect(await pane.page.locator("#lw-approve-pick").inputValue()).toBe(id);
+    expect(await pane.page.locator("#lw-approve-memory").count()).toBe(0);
+    await pane.page.locator("#lw-approver").fill("B. Reviewer");
+    await pane.page.locator("#lw-approve-date").fill("2026-03-31");
+    await pane.page.locator("#lw-approve-button").click();
+    await pane.page.waitForSelector('#lw-approve-status [data-approval="approved"]');
+    await showView(pane.page, "library");
+    expect(await item.locator("[data-approval]").textContent()).toBe("approved by B. Reviewer on 2026-03-31");
+    const stored = (await storedFiles(pane.page)).find((f) => f.id === id)!;
+    expect(stored.approval.fingerprint).toBe(independentFingerprint({ ...STRENGTH_FIXTURE, id }));
   });
 
   test("an imported copy of a shipped id that differs is stored only when confirmed, and says it differs", async () => {

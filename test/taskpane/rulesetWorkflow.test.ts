@@ -173,9 +173,12 @@ describe("approving", () => {
 describe("comparing", () => {
   test("shows the copy's changed combination and the concrete rows only the shipped original forms", async () => {
     await showView(pane.page, "compare");
-    // An UNVERIFIED ruleset says so even as a choice in a list.
+    // An UNVERIFIED ruleset says so even as a choice in a list, and only an UNVERIFIED one.
     expect(await pane.page.locator('#lw-compare-before option[value="shipped:asce7-16-strength"]').textContent()).toBe("asce7-16-strength (shipped) — UNVERIFIED");
-    expect(await pane.page.locator('#lw-compare-before option[value="shipped:en1990-equ"]').textContent()).toBe("en1990-equ (shipped)");
+    for (const { id, status } of shippedRulesets()) {
+      const suffix = status.verification === "unverified" ? " — UNVERIFIED" : "";
+      expect(await pane.page.locator(`#lw-compare-before option[value="shipped:${id}"]`).textContent()).toBe(`${id} (shipped)${suffix}`);
+    }
     await pane.page.locator("#lw-compare-before").selectOption("shipped:asce7-16-strength");
     await pane.page.locator("#lw-compare-after").selectOption("stored:firm-asce7-16");
     // Without SDS (no default) the rows cannot be formed; the pane says so and names it.
