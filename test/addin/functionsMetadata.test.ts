@@ -186,6 +186,10 @@ describe("functions.json against the platform's custom-function metadata rules",
       expect(signature?.tags, f.id).toContain("requiresParameterAddresses");
       expect(f.parameters.map((p) => p.name)).not.toContain(signature?.parameters.at(-1)?.name);
     }
+    // And the other way: a declaration tagged @requiresParameterAddresses has the option in the metadata.
+    for (const s of byId.values()) {
+      if (s.tags.includes("requiresParameterAddresses")) expect(functions.find((f) => f.id === s.id)?.options?.requiresParameterAddresses, s.id).toBe(true);
+    }
   });
 
   test("matches each declared TypeScript signature: a 2-D array is a matrix, anything else a scalar, '?' optional, ids as written", () => {
