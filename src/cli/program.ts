@@ -7,6 +7,7 @@ import { explainCommand } from "./commands/explain.js";
 import { factoredCommand } from "./commands/factored.js";
 import { governingCommand } from "./commands/governing.js";
 import { rulesetsCommand } from "./commands/rulesets.js";
+import { sheetCommand } from "./commands/sheet.js";
 import { CAUTIONS } from "./output/preamble.js";
 import { VERSION } from "./version.js";
 
@@ -129,6 +130,20 @@ export function buildProgram(io: Io): Command {
       `\nExamples:\n  loadwright explain reactions.csv -r my-rules.json --row "2: 1.2D + 1.6L" --component P\n  loadwright explain reactions.csv -r my-rules.json --row 7 --component V\n${CASE_FILE_HELP}\n${CAUTION_HELP}`,
     )
     .action((file: string, options) => explainCommand(file, options, io));
+
+  caseOptions(
+    rulesetOptions(
+      program
+        .command("sheet")
+        .description("write the reviewer's copy: a worksheet of plain formulas any spreadsheet program recomputes without Loadwright")
+        .argument("<file>", "case file (CSV or JSON)")
+        .requiredOption("-o, --out <book.xlsx>", "the workbook to write")
+        .option("-c, --criterion <criterion>", "a governing criterion, as for `governing` (repeat it)", collect, [])
+        .option("--row-limit <n>", ROW_LIMIT_HELP, "200000"),
+    ),
+  )
+    .addHelpText("after", `\nExamples:\n  loadwright sheet reactions.csv -r asce7-16-strength --param SDS=1.0 --out review.xlsx\n  loadwright sheet reactions.csv -r my-rules.json --criterion "max |M|" --out review.xlsx\n${CASE_FILE_HELP}\n${CAUTION_HELP}`)
+    .action((file: string, options) => sheetCommand(file, options, io));
 
   return program;
 }

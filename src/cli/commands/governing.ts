@@ -34,7 +34,7 @@ export async function governingCommand(file: string, options: GoverningCommandOp
   return governingOfStream(file, prepared, input, options, io);
 }
 
-function criteriaOrFail(texts: string[], components: readonly string[]): Criterion[] {
+export function criteriaOrFail(texts: string[], components: readonly string[]): Criterion[] {
   const lines: string[] = [];
   const criteria: Criterion[] = [];
   for (const text of texts) {
