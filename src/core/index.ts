@@ -55,3 +55,9 @@ export { planForTable } from "./planForTable.js";
 
 // Shipped rulesets
 export { shippedRulesets, findShippedRuleset, type ShippedRuleset } from "./library/shippedRulesets.js";
+
+// Firm library: one approved list for many workbooks
+export { FIRM_LIBRARY_FORMAT, MAX_FIRM_LIBRARY_CHARACTERS, firmLibrarySchema, type FirmLibraryFile } from "./library/firmLibrarySchema.js";
+export { loadFirmLibrary, type FirmLibrary, type FirmLibraryEntry } from "./library/loadFirmLibrary.js";
+export { STANDINGS, currentVersion, isLibraryApproved, standingOf, type RulesetStanding, type Standing } from "./library/rulesetStanding.js";
+export { STANDING_WORDS, standingSentence, type StandingWords } from "./text/standing.js";
