@@ -19,7 +19,7 @@ export {
 
 // Rulesets
 export { loadRuleset } from "./ruleset/loadRuleset.js";
-export { duplicateKeys, type DuplicateKey } from "./ruleset/jsonSyntax.js";
+export { duplicateKeys, jsonSyntaxError, type DuplicateKey } from "./ruleset/jsonSyntax.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
 export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";
