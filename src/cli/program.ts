@@ -7,6 +7,7 @@ import { envelopeCommand } from "./commands/envelope.js";
 import { explainCommand } from "./commands/explain.js";
 import { factoredCommand } from "./commands/factored.js";
 import { governingCommand } from "./commands/governing.js";
+import { libraryCommand } from "./commands/library.js";
 import { rulesetsCommand } from "./commands/rulesets.js";
 import { CAUTIONS } from "./output/preamble.js";
 import { VERSION } from "./version.js";
@@ -146,6 +147,14 @@ export function buildProgram(io: Io): Command {
     .addOption(new Option("-f, --format <format>", "output format: table, csv, json or md (default: table on a terminal, csv otherwise)"))
     .addHelpText("after", AUDIT_HELP)
     .action((workbook: string, options) => auditCommand(workbook, options, io));
+
+  program
+    .command("library")
+    .description("check a firm library (loadwright-library/1) as audit loads it, and list its approved rulesets")
+    .argument("<file>", "the firm library file")
+    .addOption(new Option("-f, --format <format>", "output format: table, csv, json or md"))
+    .addHelpText("after", `\nExamples:\n  loadwright library firm-library.json\n  loadwright library firm-library.json --format json\n${CAUTION_HELP}`)
+    .action((file: string, options: { format?: string }) => libraryCommand(file, options, io));
 
   return program;
 }

@@ -331,3 +331,29 @@ describe("audit refuses what it cannot read, with located messages", () => {
     expect(stderr).toMatch(new RegExp(`^loadwright: error: unapproved\\.json line ${line}, column \\d+ \\(rulesets\\[0\\]\\.approval\\.fingerprint\\): ruleset "en1990-equ" is not approved`, "m"));
   });
 });
+
+describe("library: checking a firm library before it is published", () => {
+  test("lists each version with its approval, the one approved last as current, and UNVERIFIED ones first", async () => {
+    const file = library("publish.json", [v2, v1, approved(shipped("en1990-equ"), "C. Approver (invented)", "2026-01-05")]);
+    const run = await loadwright(["library", file, "--format", "csv"], { cwd: dir });
+    expect(run.status).toBe(0);
+    expect(run.stderr).toMatch(/^loadwright: \*\*\* UNVERIFIED RULESETS IN THIS LIBRARY: asce7-16-strength/m);
+    expect(run.stderr).toMatch(/loads; 2 current rulesets and 1 superseded/);
+    expect(csvRows(run.stdout).map((r) => r.slice(0, 5))).toEqual([
+      ["id", "version", "standing in library", "approved by", "date"],
+      ["asce7-16-strength", "1.0.1", "current", "B. Approver (invented)", "2026-02-27"],
+      ["asce7-16-strength", v1.version, "superseded", "A. Approver (invented)", "2025-06-30"],
+      ["en1990-equ", shipped("en1990-equ").version, "current", "C. Approver (invented)", "2026-01-05"],
+    ]);
+  });
+
+  test("refuses a library that does not load, exit 1, every problem on its own line", async () => {
+    const changed = { ...v2, version: "1.0.1-edited" };
+    const run = await loadwright(["library", library("bad.json", [v1, changed, v1])], { cwd: dir });
+    expect(run.status).toBe(1);
+    const lines = run.stderr.split("\n").filter((l) => l.startsWith("loadwright: error: "));
+    expect(lines).toHaveLength(2);
+    expect(lines[0]).toMatch(/^loadwright: error: bad\.json line \d+, column \d+ \(rulesets\[1\]\.approval\.fingerprint\): the approval of "asce7-16-strength" was given to other content/);
+    expect(lines[1]).toMatch(/^loadwright: error: bad\.json line \d+, column \d+ \(rulesets\[2\]\): the same content of "asce7-16-strength" .* is listed twice \(also at rulesets\[0\]\)/);
+  });
+});
