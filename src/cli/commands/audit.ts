@@ -72,10 +72,20 @@ function preamble(report: AuditReport, format: Format): string[] {
     const current = library.entries.filter((e) => e.current).length;
     lines.push(`Library: ${file}, "${library.title}", ${library.owner}, dated ${library.date}: ${current} current ruleset${current === 1 ? "" : "s"}${library.entries.length > current ? ` and ${library.entries.length - current} superseded` : ""}`);
   }
-  const unverified = new Set<string>();
-  for (const s of report.stored) if (s.status?.verification === "unverified" && s.ruleset) unverified.add(s.ruleset.file.id);
-  for (const f of report.formulas) if (f.content?.source === "shipped" && f.content.status.verification === "unverified") unverified.add(f.content.ruleset.file.id);
-  if (unverified.size > 0) lines.unshift(`*** UNVERIFIED RULESETS IN THIS WORKBOOK: ${[...unverified].join(", ")}: their factors are from memory and have not been checked against the standard ***`);
+  // Each UNVERIFIED ruleset in use or stored, by content, with what exactly is from memory.
+  const unverified = new Map<string, { id: string; status: RulesetStatus }>();
+  const note = (id: string, status: RulesetStatus | null) => {
+    if (status?.verification === "unverified") unverified.set(status.fingerprint, { id, status });
+  };
+  for (const s of report.stored) if (s.ruleset) note(s.ruleset.file.id, s.status);
+  for (const f of report.formulas) if (f.content?.source === "shipped") note(f.content.ruleset.file.id, f.content.status);
+  if (unverified.size > 0) {
+    const ids = [...new Set([...unverified.values()].map((u) => u.id))];
+    lines.unshift(
+      `*** UNVERIFIED RULESETS IN THIS WORKBOOK: ${ids.join(", ")}: their factors are from memory and have not been checked against the standard ***`,
+      ...[...unverified.values()].map((u) => `Unverified: ${u.id} (fingerprint ${u.status.shortFingerprint}), from memory: ${u.status.fromMemory.join("; ")}`),
+    );
+  }
   lines.push(
     "What this shows: the rulesets the saved file's formulas name and the rulesets it stores, by fingerprint. It does not recalculate: cell values are those last saved, and whether the numbers are right is the engineer's review.",
   );

@@ -21,7 +21,12 @@ export async function libraryCommand(file: string, options: { format?: string },
     ...library.notes.map((n) => `Note: ${n}`),
   ];
   const unverified = rows.filter((r) => r.entry.current && r.status.verification === "unverified").map((r) => r.entry.ruleset.file.id);
-  if (unverified.length > 0) lines.unshift(`*** UNVERIFIED RULESETS IN THIS LIBRARY: ${unverified.join(", ")}: approved, but their factors are from memory and have not been checked against the standard ***`);
+  if (unverified.length > 0) {
+    lines.unshift(
+      `*** UNVERIFIED RULESETS IN THIS LIBRARY: ${unverified.join(", ")}: approved, but their factors are from memory and have not been checked against the standard ***`,
+      ...rows.filter((r) => r.entry.current && r.status.verification === "unverified").map((r) => `Unverified: ${r.entry.ruleset.file.id} ${r.entry.ruleset.file.version}, from memory: ${r.status.fromMemory.join("; ")}`),
+    );
+  }
   const cautions = CAUTIONS.map((c) => `Caution: ${c}`);
   const target = isMachineFormat(format) ? io.err : io.out;
   if (format === "md") for (const l of [...lines, ...cautions]) target.line(`> ${l}  `);
