@@ -156,6 +156,29 @@ describe("audit on workbooks that store rulesets", () => {
     expect(json.result).toMatchObject({ passed: false, notApproved: 5 });
   });
 
+  test("refuses to name a ruleset stored with different content by two add-in installations", async () => {
+    // Settings are kept per add-in (Office.Settings: "saved per add-in and per document"), so a workbook
+    // opened with two installations of the add-in under different ids holds two add-in parts.
+    const zip = await JSZip.loadAsync(await withStoredRulesets(demo, [v2]));
+    const second = webExtensionPart(`    <we:property name="loadwright.rulesets" value="${storeValue([v1])}"/>`).replace(/<we:reference id="[^"]*"/, '<we:reference id="wa200000000"');
+    zip.file("xl/webextensions/webextension2.xml", second);
+    const types = await (zip.file("[Content_Types].xml") as JSZip.JSZipObject).async("string");
+    zip.file("[Content_Types].xml", types.replace("</Types>", '<Override PartName="/xl/webextensions/webextension2.xml" ContentType="application/vnd.ms-office.webextension+xml"/></Types>'));
+    write("two-installations.xlsx", await zip.generateAsync({ type: "uint8array" }));
+    const { status, json } = await auditJson(["two-installations.xlsx", "--library", library("two-versions.json", [v1, v2])]);
+    expect(status).toBe(3);
+    expect(json.addInParts.map((p) => [p.part, p.addIn])).toEqual([
+      ["xl/webextensions/webextension1.xml", "f08e1263-da3a-4fea-969f-bcf2d0cafa40"],
+      ["xl/webextensions/webextension2.xml", "wa200000000"],
+    ]);
+    expect(json.storedRulesets.map((s) => [s.part, s.standing?.standing])).toEqual([
+      ["xl/webextensions/webextension1.xml", "same"],
+      ["xl/webextensions/webextension2.xml", "library-newer"],
+    ]);
+    expect(json.formulas[0].ruleset).toMatchObject({ source: "none", reason: expect.stringMatching(/"asce7-16-strength" is stored with different content in xl\/webextensions\/webextension1\.xml and xl\/webextensions\/webextension2\.xml/) });
+    expect(json.formulas[0].libraryApproved).toBe(false);
+  });
+
   test("lists stored rulesets without a library, exit 0, and in CSV one line per stored ruleset and per formula", async () => {
     write("stores-two.xlsx", await withStoredRulesets(demo, [v2, approved(shipped("en1990-equ"), "A. Approver (invented)", "2026-01-05")]));
     const { status, stdout } = await audit(["stores-two.xlsx", "--format", "csv"]);
@@ -226,7 +249,7 @@ describe("audit on the forms Excel writes", () => {
     const byCell = new Map(json.formulas.map((f) => [`${f.sheet}!${f.cell}`, f]));
     expect(byCell.get("Calc!B2")?.stored).toBe("_xldudf_LW_RULESET('Load cases'!B1)"); // the shared formula moved one column
     expect(byCell.get("Calc!A4")?.formula).toBe("=LW.COMBOS(Calc!$E$1:$F$1)");
-    expect(byCell.get("Calc!A5")?.ruleset.reason).toMatch(/the ruleset argument IF\(TRUE,"en1990-equ","x"\) is computed by the formula/);
+    expect(byCell.get("Calc!A5")?.ruleset.reason).toMatch(/the ruleset argument IF\(TRUE,"en1990-equ","x"\) is an expression the audit does not evaluate/);
     expect(byCell.get("Calc!A8")?.ruleset.reason).toMatch(/refers to another workbook/);
   });
 

@@ -66,7 +66,7 @@ function fromArgument(arg: string, sheet: number, book: BookCells, via: string):
     if (via !== "") return { kind: "unresolved", reason: `${via}name ${arg} names another name; the audit follows one name only` };
     return fromArgument(name.formula.trim(), sheet, book, `name ${arg} → `);
   }
-  return { kind: "unresolved", reason: `${via}the ruleset argument ${arg} is computed by the formula; the audit reads only text, one cell or a defined name naming one` };
+  return { kind: "unresolved", reason: `${via}the ruleset argument ${arg} is an expression the audit does not evaluate; it reads text, a cell or range, or a defined name naming one` };
 }
 
 function fromCell(value: CellValue | undefined, from: string): RulesetReference {
