@@ -9,7 +9,7 @@
  */
 import { RULESET_ID_PATTERN } from "../../core/index.js";
 import { address, parseReference, type LoadwrightCall } from "./formulaText.js";
-import type { CellValue, DefinedName, SheetCells } from "./workbookCells.js";
+import type { CellValue, CellValues, DefinedName } from "./workbookCells.js";
 
 /** The 0-based position of the ruleset argument of each formula, as declared in src/functions/functions.ts. */
 export const RULESET_ARGUMENT: Readonly<Record<string, number>> = {
@@ -30,8 +30,8 @@ export type RulesetReference =
   | { kind: "not-loadwright"; reason: string };
 
 export interface BookCells {
-  /** Sheet names in workbook order, with their cells. */
-  sheets: { name: string; cells: SheetCells }[];
+  /** Sheets in workbook order: the addresses of their formula cells, and the values asked for. */
+  sheets: { name: string; formulas: ReadonlySet<string>; values: CellValues }[];
   names: DefinedName[];
 }
 
@@ -56,9 +56,9 @@ function fromArgument(arg: string, sheet: number, book: BookCells, via: string):
     if (ref.first.row !== ref.last.row || ref.first.column !== ref.last.column) {
       return { kind: "cells", from: `${via}${where}:${address(ref.last)}` };
     }
-    const cells = book.sheets[target].cells;
+    const cells = book.sheets[target];
     const value = cells.values.get(address(ref.first));
-    const computed = cells.formulas.some((f) => f.address === address(ref.first)) ? ", the value its formula last gave" : "";
+    const computed = cells.formulas.has(address(ref.first)) ? ", the value its formula last gave" : "";
     return fromCell(value, `${via}${where}${computed}`);
   }
   const name = definedName(arg, sheet, book.names);

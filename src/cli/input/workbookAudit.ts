@@ -17,7 +17,7 @@ import {
 import { loadwrightCalls, type LoadwrightCall } from "./formulaText.js";
 import { rulesetReference, type BookCells, type RulesetReference } from "./formulaRuleset.js";
 import type { ChosenLibrary } from "./libraryOption.js";
-import { readSheetCells, readWorkbookIndex } from "./workbookCells.js";
+import { readSheetCells, readWorkbookIndex, type CellValue, type FormulaCell, type Sheet } from "./workbookCells.js";
 import { WorkbookPackage } from "./workbookPackage.js";
 import { readStoredRulesets, storedProblemLine, type AddInPart, type StoredRuleset } from "./workbookSettings.js";
 
@@ -74,17 +74,31 @@ export async function auditWorkbook(file: string, library: ChosenLibrary | null)
     return { stored: s, ruleset: s.loaded.value, status, standing: library ? standingOf(library.library, s.id, status.fingerprint) : null, problems: [] };
   });
 
-  const book: BookCells = { sheets: [], names: index.names };
-  for (const sheet of index.sheets) book.sheets.push({ name: sheet.name, cells: await readSheetCells(pkg, sheet, index.sharedStrings) });
+  // First the formulas of every sheet, no values; then only the cells their ruleset arguments name,
+  // found by resolving once against values that record what is asked of them.
+  const sheets: { sheet: Sheet; formulas: FormulaCell[]; calls: { cell: FormulaCell; call: LoadwrightCall }[] }[] = [];
+  for (const sheet of index.sheets) {
+    const { formulas } = await readSheetCells(pkg, sheet, index.sharedStrings, new Set());
+    sheets.push({ sheet, formulas, calls: formulas.flatMap((cell) => loadwrightCalls(cell.formula).map((call) => ({ cell, call }))) });
+  }
+  const asked = sheets.map(() => new Set<string>());
+  const recording: BookCells = {
+    names: index.names,
+    sheets: sheets.map((s, i) => ({ name: s.sheet.name, formulas: new Set(s.formulas.map((f) => f.address)), values: { get: (a: string) => void asked[i].add(a) } })),
+  };
+  sheets.forEach((s, i) => s.calls.forEach(({ call }) => rulesetReference(call, i, recording)));
+  const book: BookCells = { names: index.names, sheets: [] };
+  for (const [i, s] of sheets.entries()) {
+    const values = asked[i].size > 0 ? (await readSheetCells(pkg, s.sheet, index.sharedStrings, asked[i])).values : new Map<string, CellValue>();
+    book.sheets.push({ name: s.sheet.name, formulas: recording.sheets[i].formulas, values });
+  }
 
   const formulas: FormulaFinding[] = [];
-  book.sheets.forEach((sheet, sheetIndex) => {
-    for (const f of sheet.cells.formulas) {
-      for (const call of loadwrightCalls(f.formula)) {
-        const reference = rulesetReference(call, sheetIndex, book);
-        const content = reference.kind === "id" ? contentOf(reference.id, stored) : null;
-        formulas.push(judge({ sheet: sheet.name, cell: f.address, formula: f.formula, call, reference, content, standing: null, passes: null, failure: null }, library));
-      }
+  sheets.forEach(({ sheet, calls }, sheetIndex) => {
+    for (const { cell, call } of calls) {
+      const reference = rulesetReference(call, sheetIndex, book);
+      const content = reference.kind === "id" ? contentOf(reference.id, stored) : null;
+      formulas.push(judge({ sheet: sheet.name, cell: cell.address, formula: cell.formula, call, reference, content, standing: null, passes: null, failure: null }, library));
     }
   });
 

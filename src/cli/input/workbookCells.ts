@@ -7,7 +7,7 @@
  */
 import { CliError } from "../cliError.js";
 import { address, cellPosition, slideFormula, type CellPosition } from "./formulaText.js";
-import { attributeOf, parseXml, XmlPartError, type XmlElement } from "./xmlPart.js";
+import { attributeOf, xmlReader, XmlPartError, type XmlElement, type XmlHandlers } from "./xmlPart.js";
 import type { WorkbookPackage } from "./workbookPackage.js";
 
 const MAIN = ["http://schemas.openxmlformats.org/spreadsheetml/2006/main", "http://purl.oclc.org/ooxml/spreadsheetml/main"];
@@ -65,7 +65,7 @@ export interface FormulaCell {
 
 export interface SheetCells {
   formulas: FormulaCell[];
-  /** Every cell's value (a formula cell's as last calculated and saved), by address ("N7"). */
+  /** Cell values (a formula cell's as last calculated and saved), by address ("N7"). */
   values: Map<string, CellValue>;
 }
 
@@ -109,7 +109,7 @@ async function readSharedStrings(pkg: WorkbookPackage, part: string): Promise<st
   const out: string[] = [];
   let current: string | null = null;
   let phonetic = 0;
-  streamPart(pkg, part, await pkg.text(part), {
+  await streamPart(pkg, part, {
     open: (el) => {
       if (el.local === "si") current = "";
       else if (el.local === "rPh") phonetic++;
@@ -126,7 +126,16 @@ async function readSharedStrings(pkg: WorkbookPackage, part: string): Promise<st
   return out;
 }
 
-export async function readSheetCells(pkg: WorkbookPackage, sheet: Sheet, sharedStrings: string[]): Promise<SheetCells> {
+/** The cell values a reader asks for, by address. */
+export interface CellValues {
+  get(address: string): CellValue | undefined;
+}
+
+/**
+ * A worksheet's formulas, and the values of the cells `wanted` names (of every
+ * cell where it is not given: a large sheet's values are kept only on request).
+ */
+export async function readSheetCells(pkg: WorkbookPackage, sheet: Sheet, sharedStrings: string[], wanted?: ReadonlySet<string>): Promise<SheetCells> {
   const formulas: FormulaCell[] = [];
   const values = new Map<string, CellValue>();
   const masters = new Map<string, { formula: string; position: CellPosition; address: string }>();
@@ -136,9 +145,8 @@ export async function readSheetCells(pkg: WorkbookPackage, sheet: Sheet, sharedS
   let column = 0;
   let cell: { address: string; position: CellPosition; type: string; value: string | null; inline: string | null; formula: XmlElement | null } | null = null;
   let phonetic = 0;
-  const text = await pkg.text(sheet.part);
   let rootChecked = false;
-  streamPart(pkg, sheet.part, text, {
+  await streamPart(pkg, sheet.part, {
     open: (el) => {
       if (!rootChecked) {
         rootChecked = true;
@@ -166,8 +174,10 @@ export async function readSheetCells(pkg: WorkbookPackage, sheet: Sheet, sharedS
       else if (el.local === "rPh") phonetic--;
       else if (el.local === "t" && cell.inline !== null && phonetic === 0) cell.inline += el.text;
       else if (el.local === "c") {
-        const value = cellValue(cell.type, cell.value, cell.inline, sharedStrings);
-        if (value) values.set(cell.address, value);
+        if (!wanted || wanted.has(cell.address)) {
+          const value = cellValue(cell.type, cell.value, cell.inline, sharedStrings);
+          if (value) values.set(cell.address, value);
+        }
         const f = cell.formula;
         if (f) {
           const kind = (attributeOf(f, "t") ?? "normal") as FormulaCell["kind"];
@@ -214,9 +224,11 @@ function cellValue(type: string, value: string | null, inline: string | null, sh
   }
 }
 
-function streamPart(pkg: WorkbookPackage, part: string, text: string, handlers: Parameters<typeof parseXml>[1]): void {
+async function streamPart(pkg: WorkbookPackage, part: string, handlers: XmlHandlers): Promise<void> {
+  const reader = xmlReader(handlers);
   try {
-    parseXml(text, handlers);
+    await pkg.streamText(part, (chunk) => reader.write(chunk));
+    reader.close();
   } catch (e) {
     if (e instanceof XmlPartError) throw new CliError(`${pkg.file}: ${part} line ${e.line}, column ${e.column}: not well-formed XML: ${e.message}`);
     throw e;

@@ -114,6 +114,35 @@ export class WorkbookPackage {
     }
   }
 
+  /**
+   * The part's text given piece by piece as it is inflated, never held whole
+   * (UTF-8; a worksheet of a million cells is read in flat memory). An error
+   * thrown by `onText` stops the reading and is passed on.
+   */
+  async streamText(part: string, onText: (chunk: string) => void): Promise<void> {
+    const entry = this.zipEntry(part);
+    if (!entry) throw new CliError(`${this.file}: the part ${part} is missing from the package`);
+    let decoder: TextDecoder | null = null;
+    let first = true;
+    const decode = (bytes: Uint8Array, end: boolean) => {
+      // The byte order mark of the first bytes says UTF-16; without one the part is UTF-8.
+      if (!decoder) decoder = new TextDecoder(bytes[0] === 0xff && bytes[1] === 0xfe ? "utf-16le" : bytes[0] === 0xfe && bytes[1] === 0xff ? "utf-16be" : "utf-8", { fatal: true });
+      let text: string;
+      try {
+        text = decoder.decode(bytes, { stream: !end });
+      } catch {
+        throw new CliError(`${this.file}: ${part}: the part is not text in UTF-8 or UTF-16; the package is damaged`);
+      }
+      if (first && text !== "") {
+        text = text.replace(/^\uFEFF/, "");
+        first = false;
+      }
+      if (text !== "") onText(text);
+    };
+    await this.inflate(part, entry, (chunk) => decode(chunk, false));
+    decode(new Uint8Array(0), true);
+  }
+
   /** The part read as an XML tree; a part that is not well-formed XML is refused with its line and column. */
   async xml(part: string): Promise<XmlElement> {
     const text = await this.text(part);
@@ -164,30 +193,39 @@ export class WorkbookPackage {
     return found ? this.zip.files[found] : null;
   }
 
-  private inflate(part: string, entry: JSZip.JSZipObject): Promise<Uint8Array> {
+  /** The part's bytes, whole, or given chunk by chunk to `onChunk` (then the promise resolves to no bytes). */
+  private inflate(part: string, entry: JSZip.JSZipObject, onChunk?: (chunk: Buffer) => void): Promise<Uint8Array> {
     return new Promise((resolve, reject) => {
       const chunks: Buffer[] = [];
       let length = 0;
-      let refused = false;
+      let stopped = false;
       const stream = entry.nodeStream("nodebuffer") as NodeJS.ReadableStream & { destroy(): void };
-      const refuse = (message: string) => {
-        refused = true;
+      const stop = (error: unknown) => {
+        stopped = true;
         stream.destroy();
-        reject(new CliError(`${this.file}: ${part}: ${message}`));
+        reject(error);
       };
       stream.on("data", (chunk: Buffer) => {
-        if (refused) return;
+        if (stopped) return;
         length += chunk.length;
         this.read += chunk.length;
-        if (length > MAX_PART_BYTES) return refuse(`the part inflates to more than ${megabytes(MAX_PART_BYTES)}; the audit refuses it (a damaged or hostile package?)`);
-        if (this.read > MAX_READ_BYTES) return refuse(`the parts read so far inflate to more than ${megabytes(MAX_READ_BYTES)}; the audit refuses the package (a damaged or hostile package?)`);
-        chunks.push(chunk);
+        if (length > MAX_PART_BYTES) return stop(new CliError(`${this.file}: ${part}: the part inflates to more than ${megabytes(MAX_PART_BYTES)}; the audit refuses it (a damaged or hostile package?)`));
+        if (this.read > MAX_READ_BYTES) return stop(new CliError(`${this.file}: ${part}: the parts read so far inflate to more than ${megabytes(MAX_READ_BYTES)}; the audit refuses the package (a damaged or hostile package?)`));
+        if (!onChunk) {
+          chunks.push(chunk);
+          return;
+        }
+        try {
+          onChunk(chunk);
+        } catch (e) {
+          stop(e);
+        }
       });
       stream.on("error", (e: Error) => {
-        if (!refused) reject(new CliError(`${this.file}: ${part}: the part cannot be inflated from the zip package, which is damaged (${e.message})`));
+        if (!stopped) reject(new CliError(`${this.file}: ${part}: the part cannot be inflated from the zip package, which is damaged (${e.message})`));
       });
       stream.on("end", () => {
-        if (!refused) resolve(Buffer.concat(chunks, length));
+        if (!stopped) resolve(onChunk ? new Uint8Array(0) : Buffer.concat(chunks, length));
       });
     });
   }

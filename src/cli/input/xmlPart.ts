@@ -42,8 +42,15 @@ export interface XmlHandlers {
   close?(element: XmlElement, depth: number): void;
 }
 
-/** Reads the text event by event; `keepTree` also links every element to its parent's children. */
-export function parseXml(text: string, handlers: XmlHandlers, keepTree = false): XmlElement | null {
+export interface XmlReader {
+  /** Feeds the next piece of text; the handlers run as elements open and close. */
+  write(chunk: string): void;
+  /** Ends the text; refuses it if an element is left open. Returns the root element. */
+  close(): XmlElement | null;
+}
+
+/** Reads text piece by piece, event by event; `keepTree` also links every element to its parent's children. */
+export function xmlReader(handlers: XmlHandlers, keepTree = false): XmlReader {
   const parser = new SaxesParser({ xmlns: true, position: true });
   const stack: XmlElement[] = [];
   let root: XmlElement | null = null;
@@ -66,20 +73,32 @@ export function parseXml(text: string, handlers: XmlHandlers, keepTree = false):
     stack.push(element);
     handlers.open?.(element, stack.length - 1);
   });
-  parser.on("text", (t) => {
+  const addText = (t: string) => {
     const top = stack[stack.length - 1];
     if (top) top.text += t;
-  });
-  parser.on("cdata", (t) => {
-    const top = stack[stack.length - 1];
-    if (top) top.text += t;
-  });
+  };
+  parser.on("text", addText);
+  parser.on("cdata", addText);
   parser.on("closetag", () => {
     const element = stack.pop();
     if (element) handlers.close?.(element, stack.length);
   });
-  parser.write(text).close();
-  return root;
+  return {
+    write: (chunk) => {
+      parser.write(chunk);
+    },
+    close: () => {
+      parser.close();
+      return root;
+    },
+  };
+}
+
+/** Reads a whole text event by event. */
+export function parseXml(text: string, handlers: XmlHandlers, keepTree = false): XmlElement | null {
+  const reader = xmlReader(handlers, keepTree);
+  reader.write(text);
+  return reader.close();
 }
 
 /** The whole part as a tree of elements. */
