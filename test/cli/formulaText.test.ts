@@ -16,6 +16,8 @@ describe("loadwrightCalls", () => {
       { name: "LW.ENVELOPE", stored: "_xldudf_LW_ENVELOPE", args: ["Cases!$A$7:$K$25", "Cases!$N$7", "Cases!$M$9:$N$10"], closed: true },
     ]);
     expect(loadwrightCalls("_xldudf_lw_ruleset(Cases!$N$7)")[0].name).toBe("LW.RULESET");
+    // Excel's prefix for functions newer than the file format (ISO/IEC 29500-1 future functions [memory]).
+    expect(loadwrightCalls('_xlfn._xldudf_LW_RULESET("x")')[0]).toMatchObject({ name: "LW.RULESET", stored: "_xlfn._xldudf_LW_RULESET", args: ['"x"'] });
     expect(loadwrightCalls('LW.COMBOS("en1990-equ", , {"D",1})')[0].args).toEqual(['"en1990-equ"', "", '{"D",1}']);
   });
 
