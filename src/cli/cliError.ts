@@ -21,6 +21,8 @@ export const EXIT = {
   badInput: 1,
   /** The command line itself is wrong: unknown command or option, missing argument. */
   usage: 2,
+  /** `audit --library`: a formula uses a ruleset that is not the library's current approved version. */
+  notApproved: 3,
   /** A defect in Loadwright: please report it. */
   internal: 70,
 } as const;

@@ -1,11 +1,13 @@
 /** The `loadwright` command line: commands, options and their help, with examples. */
 import { Command, Option } from "commander";
+import { auditCommand } from "./commands/audit.js";
 import { combosCommand } from "./commands/combos.js";
 import type { Io } from "./commands/common.js";
 import { envelopeCommand } from "./commands/envelope.js";
 import { explainCommand } from "./commands/explain.js";
 import { factoredCommand } from "./commands/factored.js";
 import { governingCommand } from "./commands/governing.js";
+import { libraryCommand } from "./commands/library.js";
 import { rulesetsCommand } from "./commands/rulesets.js";
 import { sheetCommand } from "./commands/sheet.js";
 import { CAUTIONS } from "./output/preamble.js";
@@ -24,6 +26,17 @@ Case files:
   or as rows (a reactions table: case headers down the first column, components across).
   The layout is detected where only one reading fits; say --layout rows|columns otherwise.
   A cases-as-columns CSV is streamed row by row (envelope, governing, explain).`;
+
+const AUDIT_HELP = `
+Examples:
+  loadwright audit calc.xlsx
+  loadwright audit calc.xlsx --library firm-library.json
+  loadwright audit calc.xlsx --library firm-library.json --format json > audit.json
+
+Exit status: 0 listed (with --library: every formula uses the library's current approved
+version); 1 the workbook or library cannot be read, or a stored ruleset does not load;
+3 with --library, a formula uses a ruleset that is not the library's current approved version.
+${CAUTION_HELP}`;
 
 function rulesetOptions(command: Command): Command {
   return command
@@ -144,6 +157,23 @@ export function buildProgram(io: Io): Command {
   )
     .addHelpText("after", `\nExamples:\n  loadwright sheet reactions.csv -r asce7-16-strength --param SDS=1.0 --out review.xlsx\n  loadwright sheet reactions.csv -r my-rules.json --criterion "max |M|" --out review.xlsx\n${CASE_FILE_HELP}\n${CAUTION_HELP}`)
     .action((file: string, options) => sheetCommand(file, options, io));
+
+  program
+    .command("audit")
+    .description("which rulesets a saved workbook's formulas use and which it stores; with --library, whether each is the firm's approved version")
+    .argument("<workbook>", "a saved .xlsx workbook")
+    .option("-l, --library <file>", "the firm library (loadwright-library/1) to check against")
+    .addOption(new Option("-f, --format <format>", "output format: table, csv, json or md (default: table on a terminal, csv otherwise)"))
+    .addHelpText("after", AUDIT_HELP)
+    .action((workbook: string, options) => auditCommand(workbook, options, io));
+
+  program
+    .command("library")
+    .description("check a firm library (loadwright-library/1) as audit loads it, and list its approved rulesets")
+    .argument("<file>", "the firm library file")
+    .addOption(new Option("-f, --format <format>", "output format: table, csv, json or md"))
+    .addHelpText("after", `\nExamples:\n  loadwright library firm-library.json\n  loadwright library firm-library.json --format json\n${CAUTION_HELP}`)
+    .action((file: string, options: { format?: string }) => libraryCommand(file, options, io));
 
   return program;
 }

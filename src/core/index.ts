@@ -19,7 +19,7 @@ export {
 
 // Rulesets
 export { loadRuleset } from "./ruleset/loadRuleset.js";
-export { duplicateKeys, type DuplicateKey } from "./ruleset/jsonSyntax.js";
+export { duplicateKeys, jsonSyntaxError, type DuplicateKey } from "./ruleset/jsonSyntax.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
 export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";
@@ -56,3 +56,9 @@ export { planForTable } from "./planForTable.js";
 
 // Shipped rulesets
 export { shippedRulesets, findShippedRuleset, type ShippedRuleset } from "./library/shippedRulesets.js";
+
+// Firm library: one approved list for many workbooks
+export { FIRM_LIBRARY_FORMAT, MAX_FIRM_LIBRARY_CHARACTERS, firmLibrarySchema, type FirmLibraryFile } from "./library/firmLibrarySchema.js";
+export { loadFirmLibrary, type FirmLibrary, type FirmLibraryEntry } from "./library/loadFirmLibrary.js";
+export { STANDINGS, currentVersion, isLibraryApproved, standingOf, type RulesetStanding, type Standing } from "./library/rulesetStanding.js";
+export { STANDING_WORDS, standingSentence, type StandingWords } from "./text/standing.js";
