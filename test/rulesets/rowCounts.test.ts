@@ -69,6 +69,32 @@ describe("asce7-16-strength row counts", () => {
   });
 });
 
+describe("asce7-10-strength row counts", () => {
+  // The table of the asce7-16-strength counts: D, L, Lr, S, R; 12 wind directions each also reversed (24);
+  // E:x and E:y, combined at the share eShare with every sign. No F, no H (the H term of combination 1 has
+  // no case, so it counts once).
+  const headers = ["D", "L", "Lr", "S", "R", ...WIND_12, "E:x", "E:y"];
+
+  test("gives the 7-16 counts, 191 and 369, where the seismic share is 0.3", () => {
+    // Every term acting, in 7-10 order (ASCE/SEI 7-10 §2.3.2, https://www.scribd.com/document/611469328):
+    //   1: 1.4D 1;  2: 3;  3: 3 × (1 + 24) = 75;  4: 24 × 3 = 72;  5: 8 seismic states;  6: 24;  7: 8   → 191
+    // With absent variants: 1;  2: 2 × 4 = 8;  3: 4 × 26 = 104;  4: 24 × 2 × 4 = 192;  5: 8 × 2 × 2 = 32;
+    //   6: 24;  7: 8                                                                                     → 369
+    const c = counts(planWith(shipped("asce7-10-strength"), { SDS: 1.1, rho: 1.3, eShare: 0.3 }, headers));
+    expect(c.everyTermActing).toEqual([1, 3, 75, 72, 8, 24, 8]);
+    expect(c.perCombination).toEqual([1, 8, 104, 192, 32, 24, 8]);
+    expect(c.total).toBe(369);
+  });
+
+  test("forms 4 seismic states, not 8, where both directions act at full value (the default share)", () => {
+    // At share 1, x leading and y leading give the same four sign pairs (±E:x ± E:y): 5 and 7 drop from 8 to 4
+    // rows with every term acting, 32 to 16 with the absent variants of 5 → 191 − 8 = 183 and 369 − 16 − 4 = 349.
+    const c = counts(planWith(shipped("asce7-10-strength"), { SDS: 1.1, rho: 1.3 }, headers));
+    expect(c.everyTermActing).toEqual([1, 3, 75, 72, 4, 24, 4]);
+    expect(c.total).toBe(349);
+  });
+});
+
 describe("nbcc2020-uls row counts", () => {
   // D, L, S; 4 wind directions, each also reversed: 8 wind cases; E:x, E:y under 100 % + 30 %: 8.
   test("gives 77 rows with every term acting and 161 with companions and principals left out", () => {

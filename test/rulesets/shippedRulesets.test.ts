@@ -25,9 +25,16 @@ const EXPECTED: Record<string, { status: "checked" | "unverified"; citation: str
   // ASCE/SEI 7-22: STRUCTURE magazine confirms 1.0S in strength design and ASD combinations 3a, 4a, 6a; the rest is from memory.
   "asce7-22-strength": { status: "unverified", citation: "ASCE/SEI 7-22 §2.3." },
   "asce7-22-asd": { status: "unverified", citation: "ASCE/SEI 7-22 §2.4." },
+  // ASCE/SEI 7-10: the standard's own text of §2.3.2 (list, exceptions, F and H rules) and §2.4.1 (list) in shared
+  // copies, §12.4.2 quoted by S. K. Ghosh Associates; nothing from memory. The ASD ruleset leaves out F, H and the
+  // §2.4.1 exceptions, which the copy found does not print.
+  "asce7-10-strength": { status: "checked", citation: "ASCE/SEI 7-10 §2.3.2, combination " },
+  "asce7-10-asd": { status: "checked", citation: "ASCE/SEI 7-10 §2.4.1, combination " },
   // IBC 2018: the equations are printed in IBC 2012- and 2015-based codes; no 2018 text printing them was found.
   "ibc2018-strength": { status: "unverified", citation: "IBC 2018 §1605.2, Equation 16-" },
   "ibc2018-asd": { status: "unverified", citation: "IBC 2018 §1605.3.1, Equation 16-" },
+  // New York City Building Code 2022: §BC 1605.2 as the city's law prints it; E taken as given (factor 1.0).
+  "nycbc2022-strength": { status: "checked", citation: "NYC BC 2022 §BC 1605.2, Equation 16-" },
   // EN 1990: expressions 6.10–6.16b, Table A1.2(A)–(C) and the ψ2 of Annex A1 are confirmed by public design guides
   // (their provenance names them); ψ0 of imposed-load categories other than B and H, of snow above 1000 m or in the
   // Nordic countries and of temperature are from memory, so every ruleset that uses ψ0 is UNVERIFIED.
@@ -53,7 +60,7 @@ const EXPECTED: Record<string, { status: "checked" | "unverified"; citation: str
 };
 
 /** Values for the parameters that have no default; invented, for planning only. */
-const REQUIRED = { SDS: 1.0, Omega0: 2.0, fSE: 0.5 };
+const REQUIRED = { SDS: 1.0, rho: 1.3, Omega0: 2.0, fSE: 0.5 };
 
 describe("the shipped rulesets", () => {
   test("are every file in rulesets/, each registered under its file name", () => {

@@ -4,6 +4,8 @@
  * Add a new file here when you add it to rulesets/; the list order is the order
  * in which pickers and listings show them.
  */
+import asce710Strength from "../../../rulesets/asce7-10-strength.json" with { type: "json" };
+import asce710Asd from "../../../rulesets/asce7-10-asd.json" with { type: "json" };
 import asce716Strength from "../../../rulesets/asce7-16-strength.json" with { type: "json" };
 import asce716StrengthOverstrength from "../../../rulesets/asce7-16-strength-overstrength.json" with { type: "json" };
 import asce716Asd from "../../../rulesets/asce7-16-asd.json" with { type: "json" };
@@ -12,6 +14,7 @@ import asce722Strength from "../../../rulesets/asce7-22-strength.json" with { ty
 import asce722Asd from "../../../rulesets/asce7-22-asd.json" with { type: "json" };
 import ibc2018Strength from "../../../rulesets/ibc2018-strength.json" with { type: "json" };
 import ibc2018Asd from "../../../rulesets/ibc2018-asd.json" with { type: "json" };
+import nycbc2022Strength from "../../../rulesets/nycbc2022-strength.json" with { type: "json" };
 import en1990Str610 from "../../../rulesets/en1990-str-6.10.json" with { type: "json" };
 import en1990Str610ab from "../../../rulesets/en1990-str-6.10ab.json" with { type: "json" };
 import en1990Equ from "../../../rulesets/en1990-equ.json" with { type: "json" };
@@ -31,8 +34,11 @@ export const SHIPPED_RULESET_FILES: readonly unknown[] = [
   asce716AsdOverstrength,
   asce722Strength,
   asce722Asd,
+  asce710Strength,
+  asce710Asd,
   ibc2018Strength,
   ibc2018Asd,
+  nycbc2022Strength,
   en1990Str610,
   en1990Str610ab,
   en1990Equ,
