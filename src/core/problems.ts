@@ -11,6 +11,9 @@ export type ProblemKind =
   | "ruleset-field"
   | "ruleset-duplicate"
   | "ruleset-name-clash"
+  // the rulesets a workbook can name
+  | "ruleset-unknown"
+  | "ruleset-store"
   // expressions
   | "expression-syntax"
   | "expression-unknown-name"
@@ -37,7 +40,8 @@ export type ProblemKind =
   | "too-many-rows"
   | "unknown-row"
   | "unknown-component"
-  | "criterion-syntax";
+  | "criterion-syntax"
+  | "result-not-finite";
 
 /** Where a problem is. Every field is optional; adapters show the ones present. */
 export interface Place {
@@ -130,9 +134,4 @@ export function describeProblem(p: Problem, options: DescribeOptions = {}): stri
   const where = describePlace(p.place, options);
   const also = p.place.also ? ` (also at ${describePlace({ row: p.place.also.row, column: p.place.also.column }, options).replace(/^cell /, "")})` : "";
   return where === "" ? `${p.message}${also}` : `${where}: ${p.message}${also}`;
-}
-
-/** Prefix every problem's place with an outer path (e.g. a combination index). */
-export function withinPath(problems: Problem[], prefix: (string | number)[]): Problem[] {
-  return problems.map((p) => ({ ...p, place: { ...p.place, path: [...prefix, ...(p.place.path ?? [])] } }));
 }
