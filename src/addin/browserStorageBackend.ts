@@ -1,5 +1,5 @@
 /** The browser's local storage: for trying the task pane outside Excel. Nothing travels with a workbook. */
-import type { SettingsBackend } from "./settingsBackend.js";
+import type { SettingsBackend } from "../workbook/settingsBackend.js";
 
 export function browserStorageBackend(storage: Storage): SettingsBackend {
   return {

@@ -5,7 +5,7 @@
  * cannot be read is never overwritten, so nothing stored is lost to a failed
  * import or a bad edit.
  */
-import { describeProblem, loadRuleset, type Problem, type Result, type Ruleset, type RulesetFile } from "../core/index.js";
+import { loadRuleset, problem, type Problem, type Result, type Ruleset, type RulesetFile } from "../core/index.js";
 import type { SettingsBackend } from "./settingsBackend.js";
 
 export const STORE_KEY = "loadwright.rulesets";
@@ -23,7 +23,7 @@ interface StoreValue {
   rulesets: unknown[];
 }
 
-const storeProblem = (message: string): Problem => ({ kind: "ruleset-json", message, place: {} });
+const storeProblem = (message: string): Problem => problem("ruleset-store", message);
 
 export class RulesetStore {
   private cache: { text: string; entries: Result<StoredRuleset[]> } | null = null;
@@ -101,9 +101,4 @@ function parseStore(text: string, where: string): Result<StoredRuleset[]> {
       return { id, file, loaded: loadRuleset(file) };
     }),
   };
-}
-
-/** One line per problem of a stored entry, for the pane and for formula messages. */
-export function storedProblemText(entry: StoredRuleset): string {
-  return entry.loaded.ok ? "" : entry.loaded.problems.map((p) => describeProblem(p)).join("; ");
 }

@@ -5,9 +5,7 @@
  */
 import { envelope } from "../../core/index.js";
 import { given, type Formula } from "../formula.js";
-import { outputTable, planNotes } from "../outputTable.js";
-import { payloadProblem } from "../payloadGuard.js";
-import { failWith, labelBytes, planOf } from "./planning.js";
+import { labelBytes, planOf, tableResult } from "./planning.js";
 
 export const ENVELOPE: Formula = {
   name: "LW.ENVELOPE",
@@ -19,21 +17,22 @@ export const ENVELOPE: Formula = {
   ],
   evaluate(args) {
     const table = given(args.table, "cases");
-    const plan = planOf(args);
-    if (!plan.ok) return plan;
-    const tooBig = payloadProblem("LW.ENVELOPE", {
-      rows: table.components.length,
-      numberColumns: 2,
-      textBytesPerRow: 2 * labelBytes(plan.value) + 40,
-    });
-    if (tooBig) return failWith(tooBig);
-    const entries = envelope(plan.value, table);
-    if (!entries.ok) return entries;
-    return outputTable(
-      given(args.ruleset, "ruleset"),
-      [table.orientation === "rows" ? "component" : "result", "max", "row giving max", "min", "row giving min"],
-      entries.value.map((e) => [e.result, e.max.value, e.max.label, e.min.value, e.min.label]),
-      planNotes(plan.value),
+    return tableResult(
+      "LW.ENVELOPE",
+      args,
+      planOf(args),
+      (p) => ({ rows: table.components.length, numberColumns: 2, textBytesPerRow: 2 * labelBytes(p) + 40 }),
+      (p) => {
+        const entries = envelope(p, table);
+        if (!entries.ok) return entries;
+        return {
+          ok: true,
+          value: {
+            header: [table.orientation === "rows" ? "component" : "result", "max", "row giving max", "min", "row giving min"],
+            body: entries.value.map((e) => [e.result, e.max.value, e.max.label, e.min.value, e.min.label]),
+          },
+        };
+      },
     );
   },
 };

@@ -5,9 +5,7 @@
  */
 import { defaultCriteria, governing } from "../../core/index.js";
 import { given, type Formula, type OutputCell } from "../formula.js";
-import { outputTable, planNotes } from "../outputTable.js";
-import { payloadProblem } from "../payloadGuard.js";
-import { failWith, labelBytes, planOf } from "./planning.js";
+import { labelBytes, planOf, tableResult } from "./planning.js";
 
 export const GOVERNING: Formula = {
   name: "LW.GOVERNING",
@@ -21,29 +19,24 @@ export const GOVERNING: Formula = {
   evaluate(args) {
     const table = given(args.table, "cases");
     const criteria = args.criteria ?? defaultCriteria(table);
-    const plan = planOf(args);
-    if (!plan.ok) return plan;
-    const tooBig = payloadProblem("LW.GOVERNING", {
-      rows: criteria.length,
-      numberColumns: table.components.length + 1,
-      textBytesPerRow: labelBytes(plan.value) + 40,
-    });
-    if (tooBig) return failWith(tooBig);
-    const rows = governing(plan.value, table, criteria);
-    if (!rows.ok) return rows;
-    // The core lists a row that governs several criteria once; a checker reads one line per criterion.
-    const lines: { order: number; cells: OutputCell[] }[] = [];
-    for (const g of rows.value) {
-      g.criteria.forEach((text, k) => {
-        lines.push({ order: criteria.findIndex((c) => c.text === text), cells: [text, g.criterionValues[k], g.label, ...g.values] });
-      });
-    }
-    lines.sort((a, b) => a.order - b.order);
-    return outputTable(
-      given(args.ruleset, "ruleset"),
-      ["criterion", "value", "combination row", ...table.components],
-      lines.map((l) => l.cells),
-      planNotes(plan.value),
+    return tableResult(
+      "LW.GOVERNING",
+      args,
+      planOf(args),
+      (p) => ({ rows: criteria.length, numberColumns: table.components.length + 1, textBytesPerRow: labelBytes(p) + 40 }),
+      (p) => {
+        const rows = governing(p, table, criteria);
+        if (!rows.ok) return rows;
+        // The core lists a row that governs several criteria once; a checker reads one line per criterion.
+        const lines: { order: number; cells: OutputCell[] }[] = [];
+        for (const g of rows.value) {
+          g.criteria.forEach((text, k) => {
+            lines.push({ order: criteria.findIndex((c) => c.text === text), cells: [text, g.criterionValues[k], g.label, ...g.values] });
+          });
+        }
+        lines.sort((a, b) => a.order - b.order);
+        return { ok: true, value: { header: ["criterion", "value", "combination row", ...table.components], body: lines.map((l) => l.cells) } };
+      },
     );
   },
 };
