@@ -1,4 +1,5 @@
 /** Reading and writing a draft's parsed JSON by path, tolerating any shape the user's text may have. */
+import { DECIMAL_TEXT } from "../core/index.js";
 
 export type Path = (string | number)[];
 export type JsonObject = Record<string, unknown>;
@@ -48,11 +49,9 @@ export function shownText(v: unknown): string {
   return JSON.stringify(v);
 }
 
-const DECIMAL = /^[+-]?(\d+(\.\d*)?|\.\d+)$/;
-
-/** A number typed with a decimal point becomes a number; anything else stays text, which the schema then refuses beside the field. */
+/** A number as the format writes it (1.2, 0.5, 1e3) becomes a number; anything else stays text, which the schema then refuses beside the field. */
 export function numberOrText(text: string): number | string | undefined {
   const t = text.trim();
   if (t === "") return undefined;
-  return DECIMAL.test(t) ? Number(t) : t;
+  return DECIMAL_TEXT.test(t) ? Number(t) : t;
 }

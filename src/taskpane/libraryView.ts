@@ -4,14 +4,15 @@
  * fingerprint; the selected one's details, what to do with it, and its
  * combination list as LW.COMBOS gives it.
  */
-import type { LibraryEntry } from "../addin/rulesetLibrary.js";
-import { comboListOf } from "./comboList.js";
+import { stampLine } from "../core/index.js";
+import { entryOrigin, type LibraryEntry } from "../workbook/rulesetLibrary.js";
+import { comboList } from "./comboList.js";
 import { button, el, uniqueId } from "./dom.js";
 import { exportButtons } from "./exportRuleset.js";
 import { newIdField } from "./newIdField.js";
 import { draftOfCopy, draftOfStored, draftOfUnloadable } from "./openDraft.js";
 import type { PaneContext } from "./paneContext.js";
-import { approvalBadge, fromMemoryList, sourceLine, verificationBadge } from "./statusText.js";
+import { approvalBadge, coverageLine, fromMemoryBox, sourceLine, verificationBadge } from "./statusText.js";
 
 export function libraryView(ctx: PaneContext): HTMLElement {
   const { doc } = ctx;
@@ -74,9 +75,9 @@ function details(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
   const { doc } = ctx;
   const root = el(doc, "section", { id: "lw-selected", "aria-labelledby": "lw-selected-title" });
   root.append(el(doc, "h2", { id: "lw-selected-title" }, entry.id));
-  const f = entry.ruleset?.file;
+  const ruleset = entry.ruleset;
   const status = entry.status;
-  if (!f || !status) {
+  if (!ruleset || !status) {
     root.append(
       el(doc, "p", { class: "problem", id: "lw-selected-problem" }, `This stored ruleset no longer loads: ${entry.problem ?? "unknown problem"}. It is kept as it was stored; formulas naming it show this message. Edit it as a draft to mend it.`),
       el(
@@ -95,15 +96,15 @@ function details(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
     if (entry.source === "stored") root.append(removeControl(ctx, entry));
     return root;
   }
+  const f = ruleset.file;
   root.append(
     el(doc, "p", { class: "entry-title" }, f.title),
     el(doc, "p", {}, `${f.standard.name} ${f.standard.edition}${f.standard.clauses ? ` — ${f.standard.clauses}` : ""}`, f.basis ? ` · ${f.basis}` : "", ` · version ${f.version}`),
     el(doc, "p", { class: "badges" }, verificationBadge(doc, status), " ", approvalBadge(doc, f, status)),
     el(doc, "p", { id: "lw-selected-summary" }, status.summary),
+    coverageLine(doc, status, "lw-selected-coverage"),
   );
-  if (status.verification === "unverified") {
-    root.append(el(doc, "div", { class: "alarm-box" }, el(doc, "p", {}, "From memory — verify against the standard before use:"), fromMemoryList(doc, f)));
-  }
+  if (status.verification === "unverified") root.append(fromMemoryBox(doc, f));
   if (f.approval.note) root.append(el(doc, "p", {}, `Approval note: ${f.approval.note}`));
   root.append(
     el(doc, "p", {}, "Fingerprint ", el(doc, "span", { class: "fingerprint", id: "lw-selected-fingerprint" }, status.fingerprint)),
@@ -141,9 +142,10 @@ function details(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
   if (entry.source === "stored") root.append(removeControl(ctx, entry));
 
   const paramsId = uniqueId("lw-params");
-  const params = el(doc, "input", { id: "lw-params", type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": paramsId }) as HTMLInputElement;
+  const params = el(doc, "input", { id: "lw-params", type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": paramsId });
   const combos = el(doc, "div", { id: "lw-combos" });
-  const renderCombos = () => combos.replaceChildren(...comboListOf(doc, entry.id, params.value));
+  const stamp = stampLine(f, status, entryOrigin(entry, ctx.storedWhere));
+  const renderCombos = () => combos.replaceChildren(...comboList(doc, ruleset, params.value, { tableId: "lw-combo-table", stamp }));
   params.addEventListener("change", renderCombos);
   root.append(
     el(doc, "h3", {}, "Combination list"),

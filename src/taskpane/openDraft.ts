@@ -5,7 +5,7 @@
  * copy is another content), an import, or a new ruleset from a small template.
  */
 import { RULESET_FORMAT, RULESET_ID_PATTERN, shortFingerprint, withoutApproval, type RulesetFile } from "../core/index.js";
-import type { LibraryEntry } from "../addin/rulesetLibrary.js";
+import type { LibraryEntry } from "../workbook/rulesetLibrary.js";
 import { EMPTY_APPROVAL, type ApprovalBlock } from "./draftCheck.js";
 import { newDraftKey, type Draft, type DraftBase } from "./draftStore.js";
 import { todayText } from "./dom.js";
