@@ -6,9 +6,11 @@ export function browserStorageBackend(storage: Storage): SettingsBackend {
     where: "this browser's local storage (demo: not saved in any workbook)",
     available: () => true,
     read: (key) => storage.getItem(key),
-    write: async (key, value) => {
-      // setItem throws (quota, private mode) before changing anything: the old value stays.
-      storage.setItem(key, value);
-    },
+    // setItem throws (quota, private mode) before changing anything: the old value stays, and the write is refused.
+    write: (key, value) =>
+      new Promise<void>((resolve) => {
+        storage.setItem(key, value);
+        resolve();
+      }),
   };
 }

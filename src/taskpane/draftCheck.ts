@@ -5,6 +5,7 @@
  * path, so the form can show it beside its field, and its spot in the text.
  */
 import { describePlace, describeProblem, formatPath, loadRuleset, rulesetStatus, type Problem, type Ruleset, type RulesetStatus } from "../core/index.js";
+import { isObject } from "./dataPath.js";
 import { duplicateKeys, locatePath, syntaxErrorSpot, type TextSpot } from "./jsonLocate.js";
 
 export interface EditorProblem {
@@ -56,7 +57,7 @@ export function checkDraft(text: string, baseApproval: ApprovalBlock): DraftChec
       ),
     );
   }
-  const approval = (data as { approval?: unknown } | null)?.approval;
+  const approval = isObject(data) ? data.approval : undefined;
   if (approval !== undefined && !sameApproval(approval, baseApproval) && !sameApproval(approval, EMPTY_APPROVAL)) {
     problems.push(
       editorProblem(

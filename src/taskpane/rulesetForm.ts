@@ -104,8 +104,8 @@ function notAList(doc: Document, what: string): HTMLElement {
 
 function combinationsSection(fc: FormContext): HTMLElement {
   const { doc, data } = fc;
-  const list = data.combinations;
-  if (!Array.isArray(list)) return section(fc, "combinations", "Combinations", "combinations", notAList(doc, "combinations"));
+  if (!Array.isArray(data.combinations)) return section(fc, "combinations", "Combinations", "combinations", notAList(doc, "combinations"));
+  const list: unknown[] = data.combinations;
   const items = list.map((c, i) => {
     const where = `combination ${i + 1}${isObject(c) && typeof c.id === "string" && c.id !== "" ? ` (${c.id})` : ""}`;
     const move = (to: number, direction: string) => () => {

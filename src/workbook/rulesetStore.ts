@@ -5,7 +5,7 @@
  * cannot be read is never overwritten, so nothing stored is lost to a failed
  * import or a bad edit.
  */
-import { loadRuleset, problem, type Problem, type Result, type Ruleset, type RulesetFile } from "../core/index.js";
+import { loadRuleset, problem, type Problem, type Result, type Ruleset } from "../core/index.js";
 import type { SettingsBackend } from "./settingsBackend.js";
 
 export const STORE_KEY = "loadwright.rulesets";
@@ -47,7 +47,8 @@ export class RulesetStore {
   }
 
   /** Validates, then adds or replaces the ruleset with the same id. Nothing is written unless it loads. */
-  async save(input: string | RulesetFile | unknown): Promise<Result<Ruleset>> {
+  /** `input`: JSON text or a parsed ruleset file, checked before anything is written. */
+  async save(input: unknown): Promise<Result<Ruleset>> {
     const loaded = loadRuleset(input);
     if (!loaded.ok) return loaded;
     const current = this.entries();
