@@ -15,6 +15,7 @@ import {
   resolveParameters,
   rulesetStatus,
   type Ruleset,
+  type RulesetFile,
 } from "../../../src/core/index.js";
 import { rulesetFile } from "../../support/rulesetFile.js";
 
@@ -25,7 +26,7 @@ const COMBINATIONS = ["1.4D", "1.2D + 1.6L", "1.2D + 1.6S + (L or 0.5W)", "1.2D 
   clause: i < 5 ? `§2.3.1 (${i + 1})` : `§2.3.6 (${i + 1})`,
 }));
 
-function ruleset(provenance: Parameters<typeof rulesetFile>[0]["provenance"]): Ruleset {
+function ruleset(provenance: RulesetFile["provenance"]): Ruleset {
   const loaded = loadRuleset(
     rulesetFile({
       symbols: {
