@@ -4,39 +4,25 @@
  * in the order given; without criteria, the max and min of every component.
  */
 import { defaultCriteria, governing } from "../../core/index.js";
-import { given, type Formula, type OutputCell } from "../formula.js";
-import { labelBytes, planOf, tableResult } from "./planning.js";
+import type { OutputCell } from "../formula.js";
+import { labelBytes, tableFormula } from "./planning.js";
 
-export const GOVERNING: Formula = {
-  name: "LW.GOVERNING",
-  parameters: [
-    { name: "cases", kind: "cases" },
-    { name: "ruleset", kind: "ruleset" },
-    { name: "criteria", kind: "criteria", optional: true },
-    { name: "params", kind: "params", optional: true },
-    { name: "options", kind: "options", optional: true },
-  ],
-  evaluate(args) {
-    const table = given(args.table, "cases");
+export const GOVERNING = tableFormula(
+  "LW.GOVERNING",
+  [{ name: "criteria", kind: "criteria", optional: true }],
+  (plan, table, args) => ({ rows: (args.criteria ?? defaultCriteria(table)).length, numberColumns: table.components.length + 1, textBytesPerRow: labelBytes(plan) + 40 }),
+  (plan, table, args) => {
     const criteria = args.criteria ?? defaultCriteria(table);
-    return tableResult(
-      "LW.GOVERNING",
-      args,
-      planOf(args),
-      (p) => ({ rows: criteria.length, numberColumns: table.components.length + 1, textBytesPerRow: labelBytes(p) + 40 }),
-      (p) => {
-        const rows = governing(p, table, criteria);
-        if (!rows.ok) return rows;
-        // The core lists a row that governs several criteria once; a checker reads one line per criterion.
-        const lines: { order: number; cells: OutputCell[] }[] = [];
-        for (const g of rows.value) {
-          g.criteria.forEach((text, k) => {
-            lines.push({ order: criteria.findIndex((c) => c.text === text), cells: [text, g.criterionValues[k], g.label, ...g.values] });
-          });
-        }
-        lines.sort((a, b) => a.order - b.order);
-        return { ok: true, value: { header: ["criterion", "value", "combination row", ...table.components], body: lines.map((l) => l.cells) } };
-      },
-    );
+    const rows = governing(plan, table, criteria);
+    if (!rows.ok) return rows;
+    // The core lists a row that governs several criteria once; a checker reads one line per criterion.
+    const lines: { order: number; cells: OutputCell[] }[] = [];
+    for (const g of rows.value) {
+      g.criteria.forEach((text, k) => {
+        lines.push({ order: criteria.findIndex((c) => c.text === text), cells: [text, g.criterionValues[k], g.label, ...g.values] });
+      });
+    }
+    lines.sort((a, b) => a.order - b.order);
+    return { ok: true, value: { header: ["criterion", "value", "combination row", ...table.components], body: lines.map((l) => l.cells) } };
   },
-};
+);

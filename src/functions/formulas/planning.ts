@@ -4,8 +4,8 @@
  * a result too large for Excel, evaluate, lay the rows out under the stamp with
  * what the plan leaves out.
  */
-import { enumerateRows, planForTable, planOmissions, rowLabel, type Plan, type Problem, type Result } from "../../core/index.js";
-import { given, type FormulaArguments, type OutputCell } from "../formula.js";
+import { enumerateRows, planForTable, planOmissions, rowLabel, type CaseTable, type Plan, type Problem, type Result } from "../../core/index.js";
+import { given, type ArgumentSpec, type Formula, type FormulaArguments, type OutputCell } from "../formula.js";
 import { outputTable } from "../outputTable.js";
 import { payloadProblem, type PayloadShape } from "../payloadGuard.js";
 
@@ -47,4 +47,37 @@ export function tableResult(
   const laid = rows(plan.value);
   if (!laid.ok) return laid;
   return outputTable(given(args.ruleset, "ruleset"), laid.value.header, laid.value.body, planOmissions(plan.value));
+}
+
+/**
+ * A formula over a case table: its arguments are the cases and the ruleset,
+ * its own (`own`), then the optional params and options; its result is laid
+ * out by tableResult from the plan for that table.
+ */
+export function tableFormula(
+  name: string,
+  own: readonly ArgumentSpec[],
+  shape: (plan: Plan, table: CaseTable, args: FormulaArguments) => PayloadShape,
+  rows: (plan: Plan, table: CaseTable, args: FormulaArguments) => Result<TableBody>,
+): Formula {
+  return {
+    name,
+    parameters: [
+      { name: "cases", kind: "cases" },
+      { name: "ruleset", kind: "ruleset" },
+      ...own,
+      { name: "params", kind: "params", optional: true },
+      { name: "options", kind: "options", optional: true },
+    ],
+    evaluate(args) {
+      const table = given(args.table, "cases");
+      return tableResult(
+        name,
+        args,
+        planOf(args),
+        (p) => shape(p, table, args),
+        (p) => rows(p, table, args),
+      );
+    },
+  };
 }
