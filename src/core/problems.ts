@@ -36,6 +36,7 @@ export type ProblemKind =
   | "cases-ragged"
   | "cases-orientation"
   | "cases-map"
+  | "cases-option"
   // evaluation
   | "too-many-rows"
   | "unknown-row"
