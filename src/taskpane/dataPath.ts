@@ -8,6 +8,23 @@ export function isObject(v: unknown): v is JsonObject {
   return v !== null && typeof v === "object" && !Array.isArray(v);
 }
 
+export type ParsedJson = { ok: true; value: unknown } | { ok: false; reason: string };
+
+/** A user's text as JSON, or the parser's reason why not: while a draft is typed, text that is not JSON yet is expected. */
+export function parseJson(text: string): ParsedJson {
+  try {
+    return { ok: true, value: JSON.parse(text) as unknown };
+  } catch (e) {
+    return { ok: false, reason: e instanceof Error ? e.message : String(e) };
+  }
+}
+
+/** A field of the text's top-level object; undefined where the text is not a JSON object or lacks the field. */
+export function topField(text: string, field: string): unknown {
+  const parsed = parseJson(text);
+  return parsed.ok && isObject(parsed.value) ? parsed.value[field] : undefined;
+}
+
 export function getAt(data: unknown, path: Path): unknown {
   let v = data;
   for (const key of path) {

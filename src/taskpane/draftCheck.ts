@@ -5,7 +5,7 @@
  * path, so the form can show it beside its field, and its spot in the text.
  */
 import { describePlace, describeProblem, formatPath, loadRuleset, problem, rulesetStatus, type Problem, type Ruleset, type RulesetStatus } from "../core/index.js";
-import { isObject } from "./dataPath.js";
+import { isObject, parseJson } from "./dataPath.js";
 import { duplicateKeys, locatePath, syntaxErrorSpot, type TextSpot } from "./jsonLocate.js";
 
 export interface EditorProblem {
@@ -35,12 +35,9 @@ export type ApprovalBlock = { approvedBy: string | null; date: string | null; fi
 export const EMPTY_APPROVAL: ApprovalBlock = { approvedBy: null, date: null, fingerprint: null };
 
 export function checkDraft(text: string, baseApproval: ApprovalBlock): DraftCheck {
-  let data: unknown = undefined;
-  try {
-    data = JSON.parse(text);
-  } catch {
-    // loadRuleset says where the syntax is broken.
-  }
+  // Text that is not JSON: loadRuleset says where the syntax is broken.
+  const parsed = parseJson(text);
+  const data = parsed.ok ? parsed.value : undefined;
   const loaded = loadRuleset(text);
   const problems: EditorProblem[] = [];
   if (data === undefined) {

@@ -6,7 +6,7 @@
  */
 import { formatPath } from "../core/index.js";
 import { comboList } from "./comboList.js";
-import { isObject } from "./dataPath.js";
+import { isObject, parseJson, type JsonObject } from "./dataPath.js";
 import { button, el } from "./dom.js";
 import { checkDraft, type DraftCheck, type EditorProblem } from "./draftCheck.js";
 import { draftId } from "./draftLabel.js";
@@ -253,24 +253,17 @@ class DraftEditor {
   }
 }
 
-function parsedObject(text: string): Record<string, unknown> | null {
-  try {
-    const parsed: unknown = JSON.parse(text);
-    return isObject(parsed) ? parsed : null;
-  } catch {
-    return null;
-  }
+function parsedObject(text: string): JsonObject | null {
+  const parsed = parseJson(text);
+  return parsed.ok && isObject(parsed.value) ? parsed.value : null;
 }
 
 /** Why the text cannot be shown as a form, or null when it can. */
 function notAnObject(text: string): string | null {
-  try {
-    const parsed: unknown = JSON.parse(text);
-    return isObject(parsed) ? null : "The text is not a JSON object ({ … }): mend it here before switching to the form.";
-  } catch {
-    const spot = syntaxErrorSpot(text);
-    return `The text is not JSON yet${spot ? ` (line ${spot.line}, column ${spot.column})` : ""}: mend it here before switching to the form.`;
-  }
+  const parsed = parseJson(text);
+  if (parsed.ok) return isObject(parsed.value) ? null : "The text is not a JSON object ({ … }): mend it here before switching to the form.";
+  const spot = syntaxErrorSpot(text);
+  return `The text is not JSON yet${spot ? ` (line ${spot.line}, column ${spot.column})` : ""}: mend it here before switching to the form.`;
 }
 
 /** Focus an element; a disabled button hands the focus to the next enabled one beside it. */

@@ -1,14 +1,12 @@
 /** How a draft is named in lists and headings: its id as typed so far, and what it was opened from. */
 import { shortFingerprint } from "../core/index.js";
+import { parseJson, topField } from "./dataPath.js";
 import type { Draft } from "./draftStore.js";
 
 export function draftId(d: Draft): string {
-  try {
-    const id = (JSON.parse(d.text) as { id?: unknown } | null)?.id;
-    return typeof id === "string" && id !== "" ? id : "(no id)";
-  } catch {
-    return "(not JSON yet)";
-  }
+  if (!parseJson(d.text).ok) return "(not JSON yet)";
+  const id = topField(d.text, "id");
+  return typeof id === "string" && id !== "" ? id : "(no id)";
 }
 
 export function baseText(d: Draft): string {

@@ -17,7 +17,7 @@ import {
   SYMBOL_DEFAULTS,
   type CaseMode,
 } from "../core/index.js";
-import { isObject, renameKey, shownText, type JsonObject } from "./dataPath.js";
+import { isObject, parseJson, renameKey, shownText, type JsonObject } from "./dataPath.js";
 import { button, el, type Child } from "./dom.js";
 import { entryButton, fieldShell, numberField, optionOf, parsedField, selectField, textField, type FormContext, type Option } from "./formFields.js";
 
@@ -439,17 +439,14 @@ function choicesField(fc: FormContext, p: JsonObject, name: string): HTMLElement
     multiline: true,
     mono: true,
     read: (typed) => {
-      try {
-        const value: unknown = JSON.parse(typed);
-        return {
-          apply: () => {
-            p.choices = value;
-            fc.changed();
-          },
-        };
-      } catch (e) {
-        return { problem: `not JSON: ${e instanceof Error ? e.message : String(e)}` };
-      }
+      const parsed = parseJson(typed);
+      if (!parsed.ok) return { problem: `not JSON: ${parsed.reason}` };
+      return {
+        apply: () => {
+          p.choices = parsed.value;
+          fc.changed();
+        },
+      };
     },
   });
 }

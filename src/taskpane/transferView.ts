@@ -8,24 +8,15 @@
  */
 import { compareRulesets, shippedRulesets, type RulesetFile } from "../core/index.js";
 import { button, el } from "./dom.js";
-import { checkDraft, EMPTY_APPROVAL, type ApprovalBlock } from "./draftCheck.js";
+import { checkDraft } from "./draftCheck.js";
 import { draftId } from "./draftLabel.js";
 import { downloadRuleset, exportFileName } from "./exportRuleset.js";
-import { draftOfImport, rulesetText } from "./openDraft.js";
+import { approvalIn, draftOfImport, rulesetText } from "./openDraft.js";
 import type { PaneContext } from "./paneContext.js";
 import { approvalBadge, sourceLine, unverifiedSuffix, verificationBadge } from "./statusText.js";
 
 export function transferView(ctx: PaneContext): HTMLElement {
   return el(ctx.doc, "div", { id: "lw-transfer" }, importSection(ctx), exportSection(ctx));
-}
-
-function approvalIn(text: string): ApprovalBlock {
-  try {
-    const a = (JSON.parse(text) as { approval?: unknown } | null)?.approval;
-    return a && typeof a === "object" ? (a as ApprovalBlock) : EMPTY_APPROVAL;
-  } catch {
-    return EMPTY_APPROVAL;
-  }
 }
 
 function importSection(ctx: PaneContext): HTMLElement {
