@@ -3,7 +3,8 @@
  * file format's schema, so every case mode the format knows round-trips
  * through the pane: a ruleset using it is imported, opened in the form (which
  * shows the mode as a value of the format), edited there, stored, and the
- * stored file still says the same mode. Driven in headless Chromium.
+ * stored file still says the same mode. And the library and the approve view
+ * say how many combinations a confirmed source lists. Driven in headless Chromium.
  */
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { caseModeSchema, RULESET_FORMAT, type CaseMode } from "../../src/core/index.js";
@@ -72,6 +73,31 @@ describe("the case modes of the format", () => {
     });
   });
 
+});
+
+describe("combinations confirmed", () => {
+  test("are counted in the library and the approve view", async () => {
+    const file = JSON.parse(rulesetUsing("each")) as { id: string; combinations: unknown[]; provenance: unknown[] };
+    file.id = "coverage-shown";
+    file.combinations.push({ id: "2", expression: "0.9D + 1.0E", clause: "invented for the test" });
+    file.provenance = [
+      { source: "a source for combination 1 (invented for the test)", status: "confirmed", covers: "combination 1", combinations: ["1"] },
+      { source: "a recollection of combination 2 (invented for the test)", status: "from-memory", covers: "combination 2", combinations: ["2"] },
+    ];
+    await showView(pane.page, "transfer");
+    await pane.page.locator("#lw-import-text").fill(JSON.stringify(file, null, 2));
+    await pane.page.locator("#lw-import-check").click();
+    await pane.page.locator("#lw-import-store").click();
+    await pane.page.waitForSelector('#lw-rulesets li.selected[data-ruleset-id="coverage-shown"]');
+    // docs/rulesets.md, "Rulesets": confirmed where a confirmed source lists it and no from-memory one does — 1 of the 2.
+    expect(await pane.page.locator("#lw-selected-coverage").textContent()).toBe("1 of 2 combinations confirmed; not confirmed: 2");
+    expect(await pane.page.locator("#lw-selected .from-memory li").allTextContents()).toEqual(["a recollection of combination 2 (invented for the test) (combination 2; combinations 2)"]);
+    await showView(pane.page, "approve");
+    expect(await pane.page.locator("#lw-approve-coverage").textContent()).toBe("1 of 2 combinations confirmed; not confirmed: 2");
+  });
+});
+
+describe("the pane", () => {
   test("writes nothing to the console", () => {
     expect(pane.console).toEqual([]);
   });
