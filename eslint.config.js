@@ -1,6 +1,38 @@
-// Lint: the recommended TypeScript rules, no string evaluation anywhere, and a
-// core that imports nothing from Office, the DOM, Node or the adapters.
+// Lint: the recommended TypeScript rules, no string evaluation anywhere, and the
+// layer map held by import rules (docs/design.md, "Layers"):
+//   src/core       the engine: imports nothing of the project's adapters, no Office, DOM or Node
+//   src/workbook   the rulesets a workbook can name (store, library): imports the core only
+//   src/functions  the formulas, src/taskpane the pane, src/cli the command line: each imports
+//                  the core (and, in the add-in, the workbook module), never another adapter
+//   src/addin      the add-in: only its entry, main.ts, wires the parts together
+// Type-aware rules run on the folders listed in TYPED; the rest follow as they are brought in.
 import tseslint from "typescript-eslint";
+
+const ADAPTERS = {
+  functions: "**/functions/**",
+  taskpane: "**/taskpane/**",
+  cli: "**/cli/**",
+  addin: "**/addin/**",
+  workbook: "**/workbook/**",
+};
+
+/** A no-restricted-imports rule refusing the named folders, with why. */
+function refuse(folders, message, extra = []) {
+  return ["error", { patterns: [{ group: folders.map((f) => ADAPTERS[f]), message }, ...extra] }];
+}
+
+/** The folders whose code is linted with type information (recommendedTypeChecked, exhaustive switches). */
+export const TYPED = [
+  "src/functions/**/*.ts",
+  "src/addin/**/*.ts",
+  "src/taskpane/**/*.ts",
+  "src/workbook/**/*.ts",
+  "src/core/text/**/*.ts",
+  "src/core/ruleset/**/*.ts",
+  "src/cli/output/**/*.ts",
+  "src/cli/program.ts",
+  "src/cli/commands/**/*.ts",
+];
 
 export default tseslint.config(
   { ignores: ["dist/**", "build/**", "node_modules/**", "coverage/**"] },
@@ -16,17 +48,43 @@ export default tseslint.config(
   {
     files: ["src/core/**/*.ts"],
     rules: {
-      "no-restricted-imports": [
-        "error",
-        {
-          patterns: [
-            { group: ["**/functions/**", "**/taskpane/**", "**/cli/**"], message: "src/core knows no adapter." },
-            { group: ["node:*", "fs", "path", "os", "child_process", "stream"], message: "src/core is pure: no Node APIs." },
-            { group: ["office-*", "@microsoft/*"], message: "src/core knows no Office." },
-          ],
-        },
-      ],
+      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook"], "src/core knows no adapter.", [
+        { group: ["node:*", "fs", "path", "os", "child_process", "stream"], message: "src/core is pure: no Node APIs." },
+        { group: ["office-*", "@microsoft/*"], message: "src/core knows no Office." },
+      ]),
       "no-restricted-globals": ["error", "window", "document", "Office", "Excel", "CustomFunctions", "OfficeRuntime", "process"],
+    },
+  },
+  {
+    files: ["src/workbook/**/*.ts"],
+    rules: { "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin"], "src/workbook is shared by the adapters: it imports the core only.") },
+  },
+  {
+    files: ["src/functions/**/*.ts"],
+    rules: { "no-restricted-imports": refuse(["taskpane", "cli", "addin"], "src/functions imports the core and src/workbook, never another adapter.") },
+  },
+  {
+    files: ["src/taskpane/**/*.ts"],
+    rules: { "no-restricted-imports": refuse(["functions", "cli", "addin"], "src/taskpane imports the core and src/workbook, never another adapter.") },
+  },
+  {
+    files: ["src/cli/**/*.ts"],
+    rules: { "no-restricted-imports": refuse(["functions", "taskpane", "addin", "workbook"], "src/cli imports the core only.") },
+  },
+  {
+    files: ["src/addin/**/*.ts"],
+    ignores: ["src/addin/main.ts"],
+    rules: { "no-restricted-imports": refuse(["functions", "taskpane", "cli"], "Only the add-in's entry (src/addin/main.ts) wires the adapters together.") },
+  },
+  {
+    files: TYPED,
+    // The ruleset reader's own files (JSON syntax, schema problems, loading) are brought in with the rest.
+    ignores: ["src/core/ruleset/loadRuleset.ts", "src/core/ruleset/jsonSyntax.ts", "src/core/ruleset/schemaProblems.ts"],
+    extends: [tseslint.configs.recommendedTypeChecked],
+    languageOptions: { parserOptions: { projectService: true, tsconfigRootDir: import.meta.dirname } },
+    rules: {
+      "@typescript-eslint/switch-exhaustiveness-check": ["error", { considerDefaultExhaustiveForUnions: true }],
+      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
     },
   },
 );

@@ -4,7 +4,7 @@
  * as UNVERIFIED, as any list not checked against a standard must.
  */
 import type { RulesetFile } from "../core/index.js";
-import type { RulesetStore } from "./rulesetStore.js";
+import type { RulesetStore } from "../workbook/rulesetStore.js";
 
 export const DEMO_RULESET: RulesetFile = {
   format: "loadwright-ruleset/1",

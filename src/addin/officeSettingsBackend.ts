@@ -5,7 +5,7 @@
  * only kept once `saveAsync` succeeds; on failure the previous value is put back
  * so the runtime never shows what the file does not hold.
  */
-import type { SettingsBackend } from "./settingsBackend.js";
+import type { SettingsBackend } from "../workbook/settingsBackend.js";
 
 export function officeSettingsBackend(): SettingsBackend {
   const settings = (): Office.Settings | null =>

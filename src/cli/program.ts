@@ -1,5 +1,9 @@
-/** The `loadwright` command line: commands, options and their help, with examples. */
-import { Command, Option } from "commander";
+/**
+ * The `loadwright` command line: commands, options and their help, with
+ * examples. Options are typed from their declarations (commander's extra
+ * typings), so a handler receives exactly what its command declares.
+ */
+import { Command, Option, type OptionValues } from "@commander-js/extra-typings";
 import { auditCommand } from "./commands/audit.js";
 import { combosCommand } from "./commands/combos.js";
 import type { Io } from "./commands/common.js";
@@ -38,14 +42,14 @@ version); 1 the workbook or library cannot be read, or a stored ruleset does not
 3 with --library, a formula uses a ruleset that is not the library's current approved version.
 ${CAUTION_HELP}`;
 
-function rulesetOptions(command: Command): Command {
+function rulesetOptions<Args extends unknown[], Opts extends OptionValues>(command: Command<Args, Opts>) {
   return command
     .requiredOption("-r, --ruleset <id|file>", "a shipped ruleset's id (see `loadwright rulesets`) or a ruleset file")
-    .option("-p, --param <name=value>", 'a ruleset parameter, e.g. --param SDS=1.0 (repeat it, or "SDS=1.0; rho=1.3")', collect, [])
+    .option("-p, --param <name=value>", 'a ruleset parameter, e.g. --param SDS=1.0 (repeat it, or "SDS=1.0; rho=1.3")', collect, [] as string[])
     .addOption(new Option("-f, --format <format>", "output format: table, csv, json or md (default: table on a terminal, csv otherwise)"));
 }
 
-function caseOptions(command: Command): Command {
+function caseOptions<Args extends unknown[], Opts extends OptionValues>(command: Command<Args, Opts>) {
   return command
     .option("--layout <layout>", "where the cases are: rows, columns or auto", "auto")
     .option("--id-columns <n>", "cases as columns: how many leading columns name a result row", "1")
@@ -53,7 +57,7 @@ function caseOptions(command: Command): Command {
     .option("--map <file>", "a case map CSV: [header, symbol] or [symbol, sum|each|orthogonal] rows");
 }
 
-export function buildProgram(io: Io): Command {
+export function buildProgram(io: Io) {
   // Set before the commands are added: each command copies these settings from its parent.
   const program = new Command("loadwright")
     .exitOverride()
@@ -76,7 +80,7 @@ export function buildProgram(io: Io): Command {
       "after",
       `\nExamples:\n  loadwright rulesets\n  loadwright rulesets --format json\n  loadwright rulesets --verification\n  loadwright rulesets --verification --format md > docs/verification.md\n${CAUTION_HELP}`,
     )
-    .action((options: { format?: string; verification?: boolean }) => rulesetsCommand(options, io));
+    .action((options) => rulesetsCommand(options, io));
 
   caseOptions(
     rulesetOptions(
@@ -103,14 +107,14 @@ export function buildProgram(io: Io): Command {
     ),
   )
     .addHelpText("after", `\nExamples:\n  loadwright factored reactions.csv --ruleset my-rules.json\n  loadwright factored reactions.csv -r my-rules.json --format json > factored.json\n${CASE_FILE_HELP}\n${CAUTION_HELP}`)
-    .action((file: string, options) => factoredCommand(file, options, io));
+    .action((file, options) => factoredCommand(file, options, io));
 
   caseOptions(rulesetOptions(program.command("envelope").description("per result, the largest and smallest value over every concrete row, with the row that gives each").argument("<file>", "case file (CSV or JSON)")))
     .addHelpText(
       "after",
       `\nExamples:\n  loadwright envelope export.csv --ruleset my-rules.json\n  loadwright envelope export.csv -r my-rules.json --id-columns 3 --format csv > envelope.csv\n${CASE_FILE_HELP}\n${CAUTION_HELP}`,
     )
-    .action((file: string, options) => envelopeCommand(file, options, io));
+    .action((file, options) => envelopeCommand(file, options, io));
 
   caseOptions(
     rulesetOptions(
@@ -118,7 +122,7 @@ export function buildProgram(io: Io): Command {
         .command("governing")
         .description("the rows chosen by criteria, with the concurrent value of every component")
         .argument("<file>", "case file (CSV or JSON)")
-        .option("-c, --criterion <criterion>", 'e.g. "max V", "min N", "max |M|", "max N/2000 + M/350", "max [C1 top]" (repeat it)', collect, [])
+        .option("-c, --criterion <criterion>", 'e.g. "max V", "min N", "max |M|", "max N/2000 + M/350", "max [C1 top]" (repeat it)', collect, [] as string[])
         .option("--row-limit <n>", ROW_LIMIT_HELP, "200000"),
     ),
   )
@@ -126,7 +130,7 @@ export function buildProgram(io: Io): Command {
       "after",
       `\nExamples:\n  loadwright governing reactions.csv --ruleset my-rules.json\n  loadwright governing reactions.csv -r my-rules.json --criterion "min P" --criterion "max |V|"\n  loadwright governing export.csv -r my-rules.json --criterion "max [C1 top]" --format json\n\nWithout --criterion, a cases-as-rows table takes "max X" and "min X" for every component.\nA cases-as-columns file needs --criterion naming its result rows.\n${CASE_FILE_HELP}\n${CAUTION_HELP}`,
     )
-    .action((file: string, options) => governingCommand(file, options, io));
+    .action((file, options) => governingCommand(file, options, io));
 
   caseOptions(
     rulesetOptions(
@@ -142,7 +146,7 @@ export function buildProgram(io: Io): Command {
       "after",
       `\nExamples:\n  loadwright explain reactions.csv -r my-rules.json --row "2: 1.2D + 1.6L" --component P\n  loadwright explain reactions.csv -r my-rules.json --row 7 --component V\n${CASE_FILE_HELP}\n${CAUTION_HELP}`,
     )
-    .action((file: string, options) => explainCommand(file, options, io));
+    .action((file, options) => explainCommand(file, options, io));
 
   caseOptions(
     rulesetOptions(
@@ -151,12 +155,12 @@ export function buildProgram(io: Io): Command {
         .description("write the reviewer's copy: a worksheet of plain formulas any spreadsheet program recomputes without Loadwright")
         .argument("<file>", "case file (CSV or JSON)")
         .requiredOption("-o, --out <book.xlsx>", "the workbook to write")
-        .option("-c, --criterion <criterion>", "a governing criterion, as for `governing` (repeat it)", collect, [])
+        .option("-c, --criterion <criterion>", "a governing criterion, as for `governing` (repeat it)", collect, [] as string[])
         .option("--row-limit <n>", ROW_LIMIT_HELP, "200000"),
     ),
   )
     .addHelpText("after", `\nExamples:\n  loadwright sheet reactions.csv -r asce7-16-strength --param SDS=1.0 --out review.xlsx\n  loadwright sheet reactions.csv -r my-rules.json --criterion "max |M|" --out review.xlsx\n${CASE_FILE_HELP}\n${CAUTION_HELP}`)
-    .action((file: string, options) => sheetCommand(file, options, io));
+    .action((file, options) => sheetCommand(file, options, io));
 
   program
     .command("audit")
@@ -165,7 +169,7 @@ export function buildProgram(io: Io): Command {
     .option("-l, --library <file>", "the firm library (loadwright-library/1) to check against")
     .addOption(new Option("-f, --format <format>", "output format: table, csv, json or md (default: table on a terminal, csv otherwise)"))
     .addHelpText("after", AUDIT_HELP)
-    .action((workbook: string, options) => auditCommand(workbook, options, io));
+    .action((workbook, options) => auditCommand(workbook, options, io));
 
   program
     .command("library")
@@ -173,7 +177,7 @@ export function buildProgram(io: Io): Command {
     .argument("<file>", "the firm library file")
     .addOption(new Option("-f, --format <format>", "output format: table, csv, json or md"))
     .addHelpText("after", `\nExamples:\n  loadwright library firm-library.json\n  loadwright library firm-library.json --format json\n${CAUTION_HELP}`)
-    .action((file: string, options: { format?: string }) => libraryCommand(file, options, io));
+    .action((file, options) => libraryCommand(file, options, io));
 
   return program;
 }

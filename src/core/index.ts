@@ -4,12 +4,13 @@
  * → plan → envelope / governing / factored / combos / explain.
  */
 export type { Cell } from "./cells.js";
-export { isBlank, cellText } from "./cells.js";
+export { isBlank, cellText, DECIMAL_TEXT } from "./cells.js";
 export {
   columnLetters,
   describePlace,
   describeProblem,
   formatPath,
+  problem,
   type DescribeOptions,
   type Place,
   type Problem,
@@ -23,9 +24,24 @@ export { duplicateKeys, jsonSyntaxError, type DuplicateKey } from "./ruleset/jso
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
 export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";
-export { rulesetStatus, combinationCoverage, VERIFICATION_TEXT, type RulesetStatus, type CombinationCoverage, type Verification, type Approval } from "./ruleset/status.js";
+export { rulesetStatus, combinationCoverage, type RulesetStatus, type CombinationCoverage, type Verification, type Approval } from "./ruleset/status.js";
+export {
+  caseModeSchema,
+  DEFAULT_ORTHOGONAL_SHARE,
+  NAME_PATTERN,
+  PARAMETER_TYPES,
+  permanenceSchema,
+  provenanceStatusSchema,
+  RULESET_FORMAT,
+  RULESET_ID_PATTERN,
+  rulesetSchema,
+  SYMBOL_DEFAULTS,
+  type Permanence,
+  type ProvenanceFile,
+  type RulesetFile,
+} from "./ruleset/schema.js";
+export { STORE_FORMAT, STORE_KEY } from "./ruleset/storeFormat.js";
 export { verificationOf, type RulesetVerification, type CombinationVerification, type NumberedSource } from "./ruleset/verification.js";
-export { NAME_PATTERN, RULESET_FORMAT, RULESET_ID_PATTERN, rulesetSchema, type RulesetFile, type ProvenanceFile } from "./ruleset/schema.js";
 export type { Ruleset, LoadSymbol, Parameter, Combination, CaseMode } from "./ruleset/model.js";
 export { compareRulesets, rowsById, type CompareOptions, type RulesetComparison, type EntryDifference, type CombinationDifference, type FieldDifference } from "./ruleset/compareRulesets.js";
 export { approveRuleset, withoutApproval } from "./ruleset/approveRuleset.js";
@@ -53,6 +69,15 @@ export { comboRows, type ComboRow } from "./evaluate/combos.js";
 export { explain, findRow, type Explanation, type ExplanationLine } from "./evaluate/explain.js";
 export { DEFAULT_ROW_LIMIT, enumerateRows, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
 export { planForTable } from "./planForTable.js";
+
+// What every surface says (one vocabulary)
+export { statusText, approvalWords, approvedByText, VERIFICATION_WORDS, type ApprovalRecord, type ApprovalWords, type StatusText } from "./text/statusText.js";
+export { CAUTIONS, cautionLine, fullCautions, shortCautions, type Caution } from "./text/cautions.js";
+export { sourceText, shippedTwin, type RulesetOrigin } from "./text/sourceText.js";
+export { coverageText, fromMemoryText, fromMemoryTexts, FROM_MEMORY_LEAD } from "./text/coverage.js";
+export { planOmissions, omissionTexts, type PlanOmissions, type SkippedCombination } from "./text/omissions.js";
+export { identityText, stampLine } from "./text/stamp.js";
+export { didYouMean, nearest, NearestName, suggestionLimit } from "./text/nearest.js";
 
 // Shipped rulesets
 export { shippedRulesets, findShippedRuleset, type ShippedRuleset } from "./library/shippedRulesets.js";

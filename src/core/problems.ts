@@ -11,6 +11,9 @@ export type ProblemKind =
   | "ruleset-field"
   | "ruleset-duplicate"
   | "ruleset-name-clash"
+  // the rulesets a workbook can name
+  | "ruleset-unknown"
+  | "ruleset-store"
   // expressions
   | "expression-syntax"
   | "expression-unknown-name"
@@ -33,11 +36,13 @@ export type ProblemKind =
   | "cases-ragged"
   | "cases-orientation"
   | "cases-map"
+  | "cases-option"
   // evaluation
   | "too-many-rows"
   | "unknown-row"
   | "unknown-component"
-  | "criterion-syntax";
+  | "criterion-syntax"
+  | "result-not-finite";
 
 /** Where a problem is. Every field is optional; adapters show the ones present. */
 export interface Place {
@@ -132,7 +137,7 @@ export function describeProblem(p: Problem, options: DescribeOptions = {}): stri
   return where === "" ? `${p.message}${also}` : `${where}: ${p.message}${also}`;
 }
 
-/** Prefix every problem's place with an outer path (e.g. a combination index). */
+/** The same problems placed inside a larger document: the prefix goes before each JSON path. */
 export function withinPath(problems: Problem[], prefix: (string | number)[]): Problem[] {
   return problems.map((p) => ({ ...p, place: { ...p.place, path: [...prefix, ...(p.place.path ?? [])] } }));
 }

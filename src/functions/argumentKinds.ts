@@ -7,7 +7,7 @@
 import type { Problem, ProblemKind, Result } from "../core/index.js";
 import { readCaseHeadersArgument, readCasesArgument } from "./casesArgument.js";
 import { readCriteriaArgument } from "./criteriaArgument.js";
-import { given, type ArgumentKind, type ArgumentSpec, type Formula, type FormulaArguments } from "./formula.js";
+import { given, type ArgumentKind, type ArgumentSpec, type Formula, type FormulaArguments, type FormulaContext } from "./formula.js";
 import { DEFAULT_OPTIONS, readOptionsArgument } from "./optionsArgument.js";
 import { NO_PARAMETERS, readParamsArgument } from "./paramsArgument.js";
 import { readRulesetArgument } from "./rulesetArgument.js";
@@ -16,7 +16,7 @@ import { readComponentArgument, readRowArgument } from "./scalarArguments.js";
 interface KindReader {
   /** Readers run by ascending order. */
   order: number;
-  read(raw: unknown, args: FormulaArguments): Result<unknown>;
+  read(raw: unknown, args: FormulaArguments, context: FormulaContext): Result<unknown>;
 }
 
 /** Keep a reader's value on the arguments, or pass its problems on. */
@@ -26,7 +26,7 @@ function into<T>(result: Result<T>, keep: (value: T) => void): Result<T> {
 }
 
 export const ARGUMENT_KINDS: Record<ArgumentKind, KindReader> = {
-  ruleset: { order: 0, read: (raw, args) => into(readRulesetArgument(raw), (v) => (args.ruleset = v)) },
+  ruleset: { order: 0, read: (raw, args, context) => into(readRulesetArgument(raw, context.library), (v) => (args.ruleset = v)) },
   params: { order: 1, read: (raw, args) => into(readParamsArgument(raw), (v) => (args.params = v)) },
   options: {
     order: 2,
@@ -62,6 +62,8 @@ export const PROBLEM_ARGUMENT: Partial<Record<ProblemKind, ArgumentKind>> = {
   "expression-structure": "ruleset",
   "expression-attribute": "ruleset",
   "expression-not-finite": "ruleset",
+  "ruleset-unknown": "ruleset",
+  "ruleset-store": "ruleset",
   "unknown-row": "row",
   "unknown-component": "component",
   "criterion-syntax": "criteria",
@@ -72,7 +74,7 @@ export type ReadArguments =
   | { ok: false; argument: ArgumentSpec; index: number; problems: Problem[] };
 
 /** Reads every argument of a formula in dependency order; stops at the first argument with problems. */
-export function readArguments(formula: Formula, raws: readonly unknown[]): ReadArguments {
+export function readArguments(formula: Formula, raws: readonly unknown[], context: FormulaContext): ReadArguments {
   const args: FormulaArguments = {
     ruleset: null,
     params: NO_PARAMETERS,
@@ -87,7 +89,7 @@ export function readArguments(formula: Formula, raws: readonly unknown[]): ReadA
     .map((spec, index) => ({ spec, index }))
     .sort((a, b) => ARGUMENT_KINDS[a.spec.kind].order - ARGUMENT_KINDS[b.spec.kind].order);
   for (const { spec, index } of order) {
-    const result = ARGUMENT_KINDS[spec.kind].read(raws[index] ?? null, args);
+    const result = ARGUMENT_KINDS[spec.kind].read(raws[index] ?? null, args, context);
     if (!result.ok) return { ok: false, argument: spec, index, problems: result.problems };
   }
   return { ok: true, value: args };

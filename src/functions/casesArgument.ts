@@ -5,6 +5,7 @@
 import {
   EMPTY_CASE_MAP,
   isBlank,
+  problem,
   readCaseHeaders,
   readCaseTable,
   type CaseTable,
@@ -18,7 +19,7 @@ import type { TableOptions } from "./formula.js";
 export function readCasesArgument(raw: unknown, ruleset: Ruleset, options: TableOptions): Result<CaseTable> {
   const m = asMatrix(raw);
   if (m === null || isEmptyArgument(m)) {
-    return { ok: false, problems: [{ kind: "cases-empty", message: "the case table is empty: select it with its header row and header column", place: {} }] };
+    return { ok: false, problems: [problem("cases-empty", "the case table is empty: select it with its header row and header column")] };
   }
   return readCaseTable(trimTrailingEmpty(m), ruleset, {
     orientation: options.orientation,

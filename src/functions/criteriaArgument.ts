@@ -3,7 +3,7 @@
  * "max |M|", "max N/2000 + M/350", in any shape; blank cells are skipped.
  * Omitted or blank: null, meaning the max and min of every component.
  */
-import { cellText, isBlank, parseCriterion, type CaseTable, type Criterion, type Problem, type Result } from "../core/index.js";
+import { cellText, isBlank, parseCriterion, problem, type CaseTable, type Criterion, type Problem, type Result } from "../core/index.js";
 import { asMatrix, isEmptyArgument } from "./excelCells.js";
 
 export function readCriteriaArgument(raw: unknown, table: CaseTable): Result<Criterion[] | null> {
@@ -15,11 +15,9 @@ export function readCriteriaArgument(raw: unknown, table: CaseTable): Result<Cri
     row.forEach((cell, c) => {
       if (isBlank(cell) || cell === 0) return;
       if (typeof cell !== "string") {
-        problems.push({
-          kind: "criterion-syntax",
-          message: `${typeof cell === "boolean" ? String(cell).toUpperCase() : cellText(cell)} is not a criterion; write text such as "max V" or "min N"`,
-          place: { row: r, column: c },
-        });
+        problems.push(
+          problem("criterion-syntax", `${typeof cell === "boolean" ? String(cell).toUpperCase() : cellText(cell)} is not a criterion; write text such as "max V" or "min N"`, { row: r, column: c }),
+        );
         return;
       }
       const parsed = parseCriterion(cell, table.components);

@@ -31,7 +31,12 @@ export function asScalar(raw: unknown): { value: Cell } | { cells: number } {
 function asCell(value: unknown): Cell {
   if (value === null || value === undefined) return null;
   if (typeof value === "string" || typeof value === "number" || typeof value === "boolean") return value;
-  return String(value);
+  // Anything else Excel may hand over (an entity, a rich value) is shown as its JSON text, which no reader takes for a number.
+  try {
+    return JSON.stringify(value) ?? typeof value;
+  } catch {
+    return typeof value;
+  }
 }
 
 const blankOrZero = (c: Cell) => isBlank(c) || c === 0;

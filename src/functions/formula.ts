@@ -4,7 +4,7 @@
  * returns a table of cells or located problems.
  */
 import type { CaseMap, CaseTable, Criterion, ParameterInput, PlanCase, Result, Ruleset, RulesetStatus } from "../core/index.js";
-import type { RulesetSource } from "../addin/rulesetLibrary.js";
+import type { RulesetLibrary, RulesetSource } from "../workbook/rulesetLibrary.js";
 
 export type ArgumentKind = "ruleset" | "params" | "options" | "cases" | "caseHeaders" | "criteria" | "row" | "component";
 
@@ -53,6 +53,12 @@ export interface FormulaArguments {
   criteria: Criterion[] | null;
   row: string | number | null;
   component: string | null;
+}
+
+/** What a formula reads besides its arguments, passed in by whoever runs it (the add-in's entry, a test). */
+export interface FormulaContext {
+  /** The rulesets an id may name: stored with the workbook, then shipped. */
+  library: RulesetLibrary;
 }
 
 export interface Formula {

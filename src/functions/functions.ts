@@ -5,7 +5,9 @@
  * functions.json and the tooltips Excel shows while typing); the webpack loader
  * appends the CustomFunctions.associate calls. Each function only hands its
  * arguments to runFormula: the logic lives in ./formulas and is tested without
- * Excel.
+ * Excel. Excel calls these functions with no way to pass anything else, so
+ * the add-in's entry hands over the workbook's rulesets once, with
+ * connectWorkbook, before any call can arrive.
  */
 import { COMBOS } from "./formulas/combosFormula.js";
 import { ENVELOPE } from "./formulas/envelopeFormula.js";
@@ -13,7 +15,19 @@ import { EXPLAIN } from "./formulas/explainFormula.js";
 import { FACTORED } from "./formulas/factoredFormula.js";
 import { GOVERNING } from "./formulas/governingFormula.js";
 import { RULESET } from "./formulas/rulesetFormula.js";
+import type { FormulaContext } from "./formula.js";
 import { runFormula } from "./runFormula.js";
+import { RulesetLibrary } from "../workbook/rulesetLibrary.js";
+import { RulesetStore } from "../workbook/rulesetStore.js";
+import { memoryBackend } from "../workbook/settingsBackend.js";
+
+/** Until the entry connects the workbook: the shipped rulesets and nothing stored. */
+let workbook: FormulaContext = { library: new RulesetLibrary(new RulesetStore(memoryBackend())) };
+
+/** The add-in's entry gives the formulas the library of the workbook they run in. */
+export function connectWorkbook(context: FormulaContext): void {
+  workbook = context;
+}
 
 /**
  * The factored matrix: every combination row of the ruleset, with its label and the value of every component. Row 1 stamps the ruleset and its status.
@@ -26,8 +40,8 @@ import { runFormula } from "./runFormula.js";
  * @returns A header row, then one row per combination row: label, then component values.
  * @requiresParameterAddresses
  */
-function factoredFormula(cases: unknown[][], ruleset: unknown[][], params?: unknown[][], options?: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
-  return runFormula(FACTORED, [cases, ruleset, params, options], invocation);
+export function factoredFormula(cases: unknown[][], ruleset: unknown[][], params?: unknown[][], options?: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
+  return runFormula(FACTORED, [cases, ruleset, params, options], workbook, invocation);
 }
 
 /**
@@ -41,8 +55,8 @@ function factoredFormula(cases: unknown[][], ruleset: unknown[][], params?: unkn
  * @returns Per component: max, row giving max, min, row giving min.
  * @requiresParameterAddresses
  */
-function envelopeFormula(cases: unknown[][], ruleset: unknown[][], params?: unknown[][], options?: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
-  return runFormula(ENVELOPE, [cases, ruleset, params, options], invocation);
+export function envelopeFormula(cases: unknown[][], ruleset: unknown[][], params?: unknown[][], options?: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
+  return runFormula(ENVELOPE, [cases, ruleset, params, options], workbook, invocation);
 }
 
 /**
@@ -57,7 +71,7 @@ function envelopeFormula(cases: unknown[][], ruleset: unknown[][], params?: unkn
  * @returns One line per criterion: criterion, value, row label, concurrent component values.
  * @requiresParameterAddresses
  */
-function governingFormula(
+export function governingFormula(
   cases: unknown[][],
   ruleset: unknown[][],
   criteria?: unknown[][],
@@ -65,7 +79,7 @@ function governingFormula(
   options?: unknown[][],
   invocation?: CustomFunctions.Invocation,
 ): unknown[][] {
-  return runFormula(GOVERNING, [cases, ruleset, criteria, params, options], invocation);
+  return runFormula(GOVERNING, [cases, ruleset, criteria, params, options], workbook, invocation);
 }
 
 /**
@@ -78,8 +92,8 @@ function governingFormula(
  * @returns A header row, then per combination row: label, clause, factors.
  * @requiresParameterAddresses
  */
-function combosFormula(ruleset: unknown[][], params?: unknown[][], cases?: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
-  return runFormula(COMBOS, [ruleset, params, cases], invocation);
+export function combosFormula(ruleset: unknown[][], params?: unknown[][], cases?: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
+  return runFormula(COMBOS, [ruleset, params, cases], workbook, invocation);
 }
 
 /**
@@ -94,8 +108,8 @@ function combosFormula(ruleset: unknown[][], params?: unknown[][], cases?: unkno
  * @returns The derivation, one line per cell, down one column.
  * @requiresParameterAddresses
  */
-function explainFormula(cases: unknown[][], ruleset: unknown[][], row: unknown, component: unknown, params?: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
-  return runFormula(EXPLAIN, [cases, ruleset, row, component, params], invocation);
+export function explainFormula(cases: unknown[][], ruleset: unknown[][], row: unknown, component: unknown, params?: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
+  return runFormula(EXPLAIN, [cases, ruleset, row, component, params], workbook, invocation);
 }
 
 /**
@@ -106,19 +120,9 @@ function explainFormula(cases: unknown[][], ruleset: unknown[][], row: unknown, 
  * @returns Field and value rows.
  * @requiresParameterAddresses
  */
-function rulesetFormula(ruleset: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
-  return runFormula(RULESET, [ruleset], invocation);
+export function rulesetFormula(ruleset: unknown[][], invocation?: CustomFunctions.Invocation): unknown[][] {
+  return runFormula(RULESET, [ruleset], workbook, invocation);
 }
-
-/** The registered functions by id, for the entry module and the tests (the loader's associate calls use the declarations above). */
-export const FORMULA_FUNCTIONS = {
-  FACTORED: factoredFormula,
-  ENVELOPE: envelopeFormula,
-  GOVERNING: governingFormula,
-  COMBOS: combosFormula,
-  EXPLAIN: explainFormula,
-  RULESET: rulesetFormula,
-} as const;
 
 /** The formula each registered id runs, so a test can hold functions.json to the code. */
 export const FORMULAS_BY_ID = { FACTORED, ENVELOPE, GOVERNING, COMBOS, EXPLAIN, RULESET } as const;

@@ -7,7 +7,7 @@
  *   header | symbol                 a header written any other way belongs to that load symbol
  *   symbol | sum, each, orthogonal  how that symbol's several cases combine
  */
-import { EMPTY_CASE_MAP, cellText, isBlank, readCaseMap, type Cell, type Problem, type Result, type Ruleset } from "../core/index.js";
+import { EMPTY_CASE_MAP, cellText, isBlank, problem, readCaseMap, type Cell, type Problem, type ProblemKind, type Result, type Ruleset } from "../core/index.js";
 import { asMatrix, blankZeroRows, isEmptyArgument } from "./excelCells.js";
 import type { TableOptions } from "./formula.js";
 
@@ -38,7 +38,7 @@ export function readOptionsArgument(raw: unknown, ruleset: Ruleset): Result<Tabl
     const key = e.name.toLowerCase().replace(/[\s_]+/g, " ");
     if (key === ORIENTATION || key === ID_COLUMNS) {
       if (seen.has(key)) {
-        problems.push(optionProblem(`${key} is given twice`, e.place));
+        problems.push(optionProblem("cases-option", `${key} is given twice`, e.place));
         continue;
       }
       seen.add(key);
@@ -46,11 +46,11 @@ export function readOptionsArgument(raw: unknown, ruleset: Ruleset): Result<Tabl
     if (key === ORIENTATION) {
       const v = cellText(e.value).toLowerCase();
       if (v === "rows" || v === "columns") options.orientation = v;
-      else problems.push(optionProblem(`orientation must be "rows" (cases down the first column) or "columns" (cases across the first row), not "${cellText(e.value)}"`, e.place));
+      else problems.push(optionProblem("cases-orientation", `orientation must be "rows" (cases down the first column) or "columns" (cases across the first row), not "${cellText(e.value)}"`, e.place));
     } else if (key === ID_COLUMNS) {
       const n = typeof e.value === "number" ? e.value : Number(cellText(e.value));
       if (Number.isInteger(n) && n >= 1) options.idColumns = n;
-      else problems.push(optionProblem(`id columns must be a whole number of 1 or more, not "${cellText(e.value)}"`, e.place));
+      else problems.push(optionProblem("cases-option", `id columns must be a whole number of 1 or more, not "${cellText(e.value)}"`, e.place));
     } else {
       mapRows.push([e.name, e.value]);
       mapPlaces.push(e.place);
@@ -72,8 +72,8 @@ export function readOptionsArgument(raw: unknown, ruleset: Ruleset): Result<Tabl
   return problems.length > 0 ? { ok: false, problems } : { ok: true, value: options };
 }
 
-function optionProblem(message: string, place: Entry["place"]): Problem {
-  return { kind: "cases-map", message, place };
+function optionProblem(kind: ProblemKind, message: string, place: Entry["place"]): Problem {
+  return problem(kind, message, place);
 }
 
 /** Two-cell rows, or cells of "name=value; …" text in a single column. */
@@ -86,7 +86,7 @@ function readEntries(m: Cell[][]): Result<Entry[]> {
     if (width >= 2) {
       const name = cellText(row[0]);
       if (name === "") {
-        problems.push(optionProblem("an options row starts with a name: orientation, id columns, a case header or a load symbol", { row: r, column: 0 }));
+        problems.push(optionProblem("cases-option", "an options row starts with a name: orientation, id columns, a case header or a load symbol", { row: r, column: 0 }));
         return;
       }
       out.push({ name, value: row[1] ?? null, place: { row: r, column: 0 } });
@@ -101,7 +101,7 @@ function readEntries(m: Cell[][]): Result<Entry[]> {
       const position = start + piece.search(/\S/) + 1;
       const eq = piece.indexOf("=");
       if (eq < 0) {
-        problems.push(optionProblem(`"${piece.trim()}" is not name=value (e.g. "orientation=columns; E=orthogonal")`, { row: r, column: 0, position }));
+        problems.push(optionProblem("cases-option", `"${piece.trim()}" is not name=value (e.g. "orientation=columns; E=orthogonal")`, { row: r, column: 0, position }));
         continue;
       }
       out.push({ name: piece.slice(0, eq).trim(), value: piece.slice(eq + 1).trim(), place: { row: r, column: 0, position } });

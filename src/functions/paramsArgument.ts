@@ -3,7 +3,7 @@
  * in one cell (or one such text per cell of a single column). Records where each
  * parameter was written, so that a value out of range later names its cell.
  */
-import { cellText, isBlank, parameterPairs, parseParameterText, type Cell, type ParameterInput, type Problem, type Result } from "../core/index.js";
+import { cellText, isBlank, parameterPairs, parseParameterText, problem, type Cell, type ParameterInput, type Problem, type Result } from "../core/index.js";
 import { asMatrix, blankZeroRows, isEmptyArgument } from "./excelCells.js";
 import type { GivenParameters } from "./formula.js";
 
@@ -35,11 +35,13 @@ function texts(rows: Cell[][]): Result<GivenParameters> {
     const cell = row[0];
     if (isBlank(cell) || cell === 0) return;
     if (typeof cell !== "string") {
-      problems.push({
-        kind: "parameter-syntax",
-        message: `${typeof cell === "boolean" ? String(cell).toUpperCase() : cell} is not name=value; give parameters as text "SDS=1.2; rho=1.3" or as a two-column range of names and values`,
-        place: { row: r, column: 0 },
-      });
+      problems.push(
+        problem(
+          "parameter-syntax",
+          `${typeof cell === "boolean" ? String(cell).toUpperCase() : cell} is not name=value; give parameters as text "SDS=1.2; rho=1.3" or as a two-column range of names and values`,
+          { row: r, column: 0 },
+        ),
+      );
       return;
     }
     const read = parseParameterText(cell);
@@ -49,7 +51,7 @@ function texts(rows: Cell[][]): Result<GivenParameters> {
     }
     for (const [name, value] of Object.entries(read.value)) {
       if (name in input) {
-        problems.push({ kind: "parameter-syntax", message: `${name} is given twice`, place: { row: r, column: 0, header: name, position: positionOf(cell, name) } });
+        problems.push(problem("parameter-syntax", `${name} is given twice`, { row: r, column: 0, header: name, position: positionOf(cell, name) }));
         continue;
       }
       input[name] = value;

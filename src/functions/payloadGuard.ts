@@ -4,7 +4,7 @@
  * built, and a result that would be too large is refused with its size and what
  * to use instead.
  */
-import type { Problem } from "../core/index.js";
+import { problem, type Problem } from "../core/index.js";
 
 export const MAX_PAYLOAD_BYTES = 5_000_000;
 
@@ -28,12 +28,10 @@ export function payloadProblem(formula: string, shape: PayloadShape): Problem | 
   if (bytes <= MAX_PAYLOAD_BYTES) return null;
   const mb = (bytes / 1_000_000).toFixed(1);
   const columns = shape.numberColumns + (shape.textBytesPerRow > 0 ? 1 : 0);
-  return {
-    kind: "too-many-rows",
-    message:
-      `${formula} would return about ${mb} MB (${shape.rows.toLocaleString("en-US")} rows × ${columns.toLocaleString("en-US")} columns), ` +
+  return problem(
+    "too-many-rows",
+    `${formula} would return about ${mb} MB (${shape.rows.toLocaleString("en-US")} rows × ${columns.toLocaleString("en-US")} columns), ` +
       `more than the about 5 MB Excel accepts from one formula; use LW.ENVELOPE or LW.GOVERNING, which find the extremes exactly without listing every row, ` +
       `or the Loadwright command line for the full listing`,
-    place: {},
-  };
+  );
 }

@@ -2,46 +2,43 @@
  * The ruleset argument: the id of a ruleset stored in the workbook or shipped
  * with Loadwright, or a range of [id, expression, clause] rows typed in cells.
  */
-import { closest } from "fastest-levenshtein";
-import { RULESET_ID_PATTERN, rulesetFromRows, rulesetStatus, type Cell, type Problem, type Result } from "../core/index.js";
-import { findInLibrary, library, storeLocation } from "../addin/rulesetLibrary.js";
+import { didYouMean, nearest, problem, RULESET_ID_PATTERN, rulesetFromRows, rulesetStatus, type Cell, type Place, type ProblemKind, type Result } from "../core/index.js";
+import type { RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import { asMatrix, blankZeroRows, isEmptyArgument } from "./excelCells.js";
 import type { ResolvedRuleset } from "./formula.js";
 
+/** The ruleset argument is one cell, or a range whose place the message names. */
+const AT_ARGUMENT: Place = { row: 0, column: 0 };
 
-const fail = (message: string, place: Problem["place"] = {}): Result<never> => ({
-  ok: false,
-  problems: [{ kind: "ruleset-field", message, place }],
-});
+const refuse = (kind: ProblemKind, message: string, place: Place = {}): Result<never> => ({ ok: false, problems: [problem(kind, message, place)] });
 
-export function readRulesetArgument(raw: unknown): Result<ResolvedRuleset> {
+export function readRulesetArgument(raw: unknown, library: RulesetLibrary): Result<ResolvedRuleset> {
   const m = asMatrix(raw);
   if (m === null || isEmptyArgument(m)) {
-    return fail("no ruleset given: write a ruleset id in quotes (e.g. a shipped id that LW.RULESET accepts) or select a range of [id, expression, clause] rows", { row: 0, column: 0 });
+    return refuse("ruleset-unknown", "no ruleset given: write a ruleset id in quotes (e.g. a shipped id that LW.RULESET accepts) or select a range of [id, expression, clause] rows", AT_ARGUMENT);
   }
   const only = m.length === 1 && m[0].length === 1 ? m[0][0] : null;
-  if (typeof only === "string" && RULESET_ID_PATTERN.test(only.trim())) return byId(only.trim());
+  if (typeof only === "string" && RULESET_ID_PATTERN.test(only.trim())) return byId(only.trim(), library);
   return typed(blankZeroRows(m));
 }
 
-function byId(id: string): Result<ResolvedRuleset> {
-  const found = findInLibrary(id);
+function byId(id: string, library: RulesetLibrary): Result<ResolvedRuleset> {
+  const { entries, storeProblem } = library.list();
+  const found = entries.find((e) => e.id === id);
   if (!found) {
-    const { entries, storeProblem } = library();
-    const ids = entries.map((e) => e.id);
-    const guess = ids.length > 0 ? closest(id, ids) : undefined;
     const shipped = entries.filter((e) => e.source === "shipped").map((e) => e.id);
     const stored = entries.filter((e) => e.source === "stored").map((e) => e.id);
-    return fail(
-      `no ruleset "${id}" is shipped or stored in ${storeLocation()}` +
-        (guess && guess !== id ? `; did you mean "${guess}"?` : "") +
+    return refuse(
+      "ruleset-unknown",
+      `no ruleset "${id}" is shipped or stored in ${library.where}` +
+        didYouMean(nearest(id, entries.map((e) => e.id))) +
         ` (shipped: ${shipped.join(", ") || "none"}; stored: ${stored.join(", ") || "none"})` +
         (storeProblem ? `; ${storeProblem}` : ""),
-      { row: 0, column: 0 },
+      AT_ARGUMENT,
     );
   }
   if (!found.ruleset || !found.status) {
-    return fail(`the ruleset "${id}" stored in ${storeLocation()} no longer loads: ${found.problem ?? "unknown problem"}`, { row: 0, column: 0 });
+    return refuse("ruleset-store", `the ruleset "${id}" stored in ${library.where} no longer loads: ${found.problem ?? "unknown problem"}`, AT_ARGUMENT);
   }
   return {
     ok: true,

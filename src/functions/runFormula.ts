@@ -5,15 +5,15 @@
  * reaches Excel: an unexpected failure becomes a #VALUE! with a plain message.
  */
 import { readArguments } from "./argumentKinds.js";
-import type { Formula, OutputCell } from "./formula.js";
+import type { Formula, FormulaContext, OutputCell } from "./formula.js";
 import { argumentAt, argumentOf, problemsText, problemText } from "./problemMessages.js";
 
 export type Outcome = { ok: true; value: OutputCell[][] } | { ok: false; message: string };
 
 /** Pure: usable in tests without any Office global. `addresses` are Excel's parameter addresses, if known. */
-export function evaluateFormula(formula: Formula, raws: readonly unknown[], addresses?: readonly string[]): Outcome {
+export function evaluateFormula(formula: Formula, raws: readonly unknown[], context: FormulaContext, addresses?: readonly string[]): Outcome {
   try {
-    const read = readArguments(formula, raws);
+    const read = readArguments(formula, raws, context);
     if (!read.ok) {
       const at = argumentAt(formula.parameters, read.index, raws, addresses);
       return { ok: false, message: problemsText(read.problems.map((p) => problemText(p, at, null))) };
@@ -31,8 +31,8 @@ export function evaluateFormula(formula: Formula, raws: readonly unknown[], addr
 }
 
 /** For Excel: the result, or a one-cell result holding a #VALUE! error with the message. */
-export function runFormula(formula: Formula, raws: readonly unknown[], invocation?: CustomFunctions.Invocation): unknown[][] {
-  const outcome = evaluateFormula(formula, raws, invocation?.parameterAddresses);
+export function runFormula(formula: Formula, raws: readonly unknown[], context: FormulaContext, invocation?: CustomFunctions.Invocation): unknown[][] {
+  const outcome = evaluateFormula(formula, raws, context, invocation?.parameterAddresses);
   if (outcome.ok) return outcome.value;
   return [[new CustomFunctions.Error(CustomFunctions.ErrorCode.invalidValue, outcome.message)]];
 }

@@ -1,50 +1,67 @@
 /**
  * A ruleset's combination list as a checker reads it: every concrete row with
- * its clause and the factor on every load symbol. For a shipped or stored
- * ruleset it is exactly what LW.COMBOS gives (stamp first); for a draft it is
- * formed by the engine from the draft itself, before anything is stored.
+ * its clause and the factor on every load symbol, then what the plan leaves
+ * out. Formed by the engine, for a shipped or stored ruleset (headed by the
+ * same stamp a formula's result carries) or for a draft before it is stored.
  */
-import { comboRows, describeProblem, parseParameterText, planCombinations, resolveParameters, type Ruleset } from "../core/index.js";
-import type { OutputCell } from "../functions/formula.js";
-import { COMBOS } from "../functions/formulas/combosFormula.js";
-import { evaluateFormula } from "../functions/runFormula.js";
+import {
+  comboRows,
+  describeProblem,
+  omissionTexts,
+  parseParameterText,
+  planCombinations,
+  planOmissions,
+  resolveParameters,
+  type Problem,
+  type Ruleset,
+} from "../core/index.js";
 import { el } from "./dom.js";
 
-/** Rows of a combination list shown at most; the formula gives all of them. */
+/** Rows of a combination list shown at most; LW.COMBOS gives all of them. */
 export const MAX_PANE_ROWS = 1000;
 
-/** LW.COMBOS for a shipped or stored id: stamp, header, rows, notes. */
-export function comboListOf(doc: Document, id: string, paramsText: string): HTMLElement[] {
-  const outcome = evaluateFormula(COMBOS, [[[id]], paramsText.trim() === "" ? null : [[paramsText]]]);
-  if (!outcome.ok) return [el(doc, "p", { class: "problem" }, outcome.message)];
-  const [stamp, header, ...rest] = outcome.value;
-  const notes = rest.filter((r) => typeof r[0] === "string" && r[0].startsWith("note:"));
-  const body = rest.filter((r) => !notes.includes(r));
+export interface ComboListOptions {
+  /** The id of the table element. */
+  tableId: string;
+  /** The ruleset stamp above the list (core/text/stamp.ts), or null for a draft. */
+  stamp: string | null;
+}
+
+/** The list for the parameters typed as "SDS=1.2; rho=1.3" (empty: the defaults), or the problems that keep it from being formed. */
+export function comboList(doc: Document, ruleset: Ruleset, paramsText: string, options: ComboListOptions): HTMLElement[] {
+  const given = parseParameterText(paramsText);
+  const values = given.ok ? resolveParameters(ruleset, given.value) : given;
+  const plan = values.ok ? planCombinations(ruleset, values.value, { cases: null }) : values;
+  if (!plan.ok) return [problemBox(doc, plan.problems, paramsText)];
+  const rows = comboRows(plan.value);
+  if (!rows.ok) return [problemBox(doc, rows.problems, paramsText)];
+  const header = ["combination row", "clause", ...plan.value.cases.map((c) => c.header)];
   return [
-    el(doc, "p", { class: "stamp", id: "lw-stamp" }, String(stamp[0])),
-    ...rowsTable(doc, "lw-combo-table", header.map(String), body),
-    ...notes.map((n) => el(doc, "p", {}, String(n[0]))),
+    ...(options.stamp === null ? [] : [el(doc, "p", { class: "stamp", id: "lw-stamp" }, options.stamp)]),
+    ...rowsTable(doc, options.tableId, header, rows.value.map((r) => [r.label, r.clause, ...r.factors])),
+    ...omissionTexts(planOmissions(plan.value)).map((n) => el(doc, "p", { class: "note" }, n)),
   ];
 }
 
-/** The same list for a draft that loads, formed by the engine from the draft. */
-export function comboListOfDraft(doc: Document, ruleset: Ruleset, paramsText: string): HTMLElement[] {
-  const given = parseParameterText(paramsText);
-  if (!given.ok) return [problemText(doc, given.problems.map((p) => `parameters, ${describeProblem(p)}`))];
-  const values = resolveParameters(ruleset, given.value);
-  const plan = values.ok ? planCombinations(ruleset, values.value, { cases: null }) : values;
-  const rows = plan.ok ? comboRows(plan.value) : plan;
-  if (!plan.ok) return [problemText(doc, plan.problems.map((p) => describeProblem(p)))];
-  if (!rows.ok) return [problemText(doc, rows.problems.map((p) => describeProblem(p)))];
-  const header = ["combination row", "clause", ...plan.value.cases.map((c) => c.header)];
-  return rowsTable(doc, "lw-draft-combo-table", header, rows.value.map((r) => [r.label, r.clause, ...r.factors]));
-}
-
-function problemText(doc: Document, lines: string[]): HTMLElement {
+/** A parameter problem names where in the typed text it is ("params, character 1: …"); others their place in the ruleset. */
+function problemBox(doc: Document, problems: readonly Problem[], paramsText: string): HTMLElement {
+  const lines = problems.map((p) => {
+    if (!p.kind.startsWith("parameter-")) return describeProblem(p);
+    const position = p.place.position ?? positionOf(paramsText, p.place.header);
+    return `params${position === null ? "" : `, character ${position}`}: ${p.message}`;
+  });
   return el(doc, "p", { class: "problem" }, lines.join("\n"));
 }
 
-function rowsTable(doc: Document, id: string, header: string[], body: OutputCell[][]): HTMLElement[] {
+/** 1-based character position of "name =" in the typed parameters. */
+function positionOf(text: string, name: string | undefined): number | null {
+  if (name === undefined) return null;
+  const escaped = name.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+  const m = new RegExp(`(^|[;\\n])\\s*(${escaped})\\s*=`, "u").exec(text);
+  return m ? m.index + m[0].indexOf(m[2]) + 1 : null;
+}
+
+function rowsTable(doc: Document, id: string, header: string[], body: (string | number)[][]): HTMLElement[] {
   const shown = body.slice(0, MAX_PANE_ROWS);
   const table = el(
     doc,
@@ -59,6 +76,6 @@ function rowsTable(doc: Document, id: string, header: string[], body: OutputCell
   ];
 }
 
-function cell(doc: Document, value: OutputCell): HTMLElement {
+function cell(doc: Document, value: string | number): HTMLElement {
   return typeof value === "number" ? el(doc, "td", { class: "num" }, value === 0 ? "" : String(value)) : el(doc, "td", {}, value);
 }

@@ -8,7 +8,7 @@ import { describeProblem, shippedRulesets, type Ruleset, type RulesetStatus } fr
 import { compareForPane, type CombinationChange } from "./concreteRows.js";
 import { button, el } from "./dom.js";
 import { checkDraft } from "./draftCheck.js";
-import { draftId } from "./editorView.js";
+import { draftId } from "./draftLabel.js";
 import type { PaneContext } from "./paneContext.js";
 import { approvalBadge, unverifiedSuffix, verificationBadge } from "./statusText.js";
 
@@ -59,13 +59,13 @@ export function compareView(ctx: PaneContext): HTMLElement {
       ...(["Drafts", "Stored", "Shipped"] as const).map((g) =>
         el(doc, "optgroup", { label: g }, ...all.filter((c) => c.group === g).map((c) => el(doc, "option", { value: c.value }, c.label))),
       ),
-    ) as HTMLSelectElement;
+    );
     s.value = value;
     return s;
   };
   const before = select("lw-compare-before", pair.before);
   const after = select("lw-compare-after", pair.after);
-  const params = el(doc, "input", { id: "lw-compare-params", type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": "lw-compare-params-hint" }) as HTMLInputElement;
+  const params = el(doc, "input", { id: "lw-compare-params", type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": "lw-compare-params-hint" });
   const result = el(doc, "div", { id: "lw-compare-result", "aria-live": "polite" });
   const render = () => {
     ctx.comparePair = { before: before.value, after: after.value };

@@ -8,6 +8,7 @@ import {
   compareRulesets,
   describeProblem,
   parseParameterText,
+  problem,
   type CombinationDifference,
   type Problem,
   type Result,
@@ -53,11 +54,12 @@ export function compareForPane(before: Ruleset, after: Ruleset, paramsText: stri
   if (unknown.length > 0) {
     return {
       ok: false,
-      problems: unknown.map((n) => ({
-        kind: "parameter-unknown" as const,
-        message: `${n} is not a parameter of either ruleset (before: ${[...inBefore].join(", ") || "none"}; after: ${[...inAfter].join(", ") || "none"})`,
-        place: { header: n, position: paramsText.indexOf(n) + 1 },
-      })),
+      problems: unknown.map((n) =>
+        problem("parameter-unknown", `${n} is not a parameter of either ruleset (before: ${[...inBefore].join(", ") || "none"}; after: ${[...inAfter].join(", ") || "none"})`, {
+          header: n,
+          position: paramsText.indexOf(n) + 1,
+        }),
+      ),
     };
   }
   const comparison = compareRulesets(before, after, { parameters: given.value });

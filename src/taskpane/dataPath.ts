@@ -1,10 +1,28 @@
 /** Reading and writing a draft's parsed JSON by path, tolerating any shape the user's text may have. */
+import { DECIMAL_TEXT } from "../core/index.js";
 
 export type Path = (string | number)[];
 export type JsonObject = Record<string, unknown>;
 
 export function isObject(v: unknown): v is JsonObject {
   return v !== null && typeof v === "object" && !Array.isArray(v);
+}
+
+export type ParsedJson = { ok: true; value: unknown } | { ok: false; reason: string };
+
+/** A user's text as JSON, or the parser's reason why not: while a draft is typed, text that is not JSON yet is expected. */
+export function parseJson(text: string): ParsedJson {
+  try {
+    return { ok: true, value: JSON.parse(text) as unknown };
+  } catch (e) {
+    return { ok: false, reason: e instanceof Error ? e.message : String(e) };
+  }
+}
+
+/** A field of the text's top-level object; undefined where the text is not a JSON object or lacks the field. */
+export function topField(text: string, field: string): unknown {
+  const parsed = parseJson(text);
+  return parsed.ok && isObject(parsed.value) ? parsed.value[field] : undefined;
 }
 
 export function getAt(data: unknown, path: Path): unknown {
@@ -48,11 +66,9 @@ export function shownText(v: unknown): string {
   return JSON.stringify(v);
 }
 
-const DECIMAL = /^[+-]?(\d+(\.\d*)?|\.\d+)$/;
-
-/** A number typed with a decimal point becomes a number; anything else stays text, which the schema then refuses beside the field. */
+/** A number as the format writes it (1.2, 0.5, 1e3) becomes a number; anything else stays text, which the schema then refuses beside the field. */
 export function numberOrText(text: string): number | string | undefined {
   const t = text.trim();
   if (t === "") return undefined;
-  return DECIMAL.test(t) ? Number(t) : t;
+  return DECIMAL_TEXT.test(t) ? Number(t) : t;
 }

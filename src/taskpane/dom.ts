@@ -2,7 +2,8 @@
 
 export type Child = string | Node | null | undefined | false;
 
-export function el(doc: Document, tag: string, attributes: Record<string, string | undefined> = {}, ...children: Child[]): HTMLElement {
+/** An element of the tag's own type (`el(doc, "input")` is an HTMLInputElement), with attributes and children. */
+export function el<K extends keyof HTMLElementTagNameMap>(doc: Document, tag: K, attributes: Record<string, string | undefined> = {}, ...children: Child[]): HTMLElementTagNameMap[K] {
   const node = doc.createElement(tag);
   for (const [k, v] of Object.entries(attributes)) if (v !== undefined && v !== "") node.setAttribute(k, v);
   for (const c of children) if (c !== null && c !== undefined && c !== false) node.append(c);
@@ -10,7 +11,7 @@ export function el(doc: Document, tag: string, attributes: Record<string, string
 }
 
 export function button(doc: Document, label: string, onClick: () => void, attributes: Record<string, string | undefined> = {}): HTMLButtonElement {
-  const b = el(doc, "button", { type: "button", ...attributes }, label) as HTMLButtonElement;
+  const b = el(doc, "button", { type: "button", ...attributes }, label);
   b.addEventListener("click", onClick);
   return b;
 }

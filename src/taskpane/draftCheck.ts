@@ -4,7 +4,8 @@
  * in the text, an approval block edited by hand). Every problem keeps its JSON
  * path, so the form can show it beside its field, and its spot in the text.
  */
-import { describePlace, describeProblem, formatPath, loadRuleset, rulesetStatus, type Problem, type Ruleset, type RulesetStatus } from "../core/index.js";
+import { describePlace, describeProblem, formatPath, loadRuleset, problem, rulesetStatus, type Problem, type Ruleset, type RulesetStatus } from "../core/index.js";
+import { isObject, parseJson } from "./dataPath.js";
 import { duplicateKeys, locatePath, syntaxErrorSpot, type TextSpot } from "./jsonLocate.js";
 
 export interface EditorProblem {
@@ -34,12 +35,9 @@ export type ApprovalBlock = { approvedBy: string | null; date: string | null; fi
 export const EMPTY_APPROVAL: ApprovalBlock = { approvedBy: null, date: null, fingerprint: null };
 
 export function checkDraft(text: string, baseApproval: ApprovalBlock): DraftCheck {
-  let data: unknown = undefined;
-  try {
-    data = JSON.parse(text);
-  } catch {
-    // loadRuleset says where the syntax is broken.
-  }
+  // Text that is not JSON: loadRuleset says where the syntax is broken.
+  const parsed = parseJson(text);
+  const data = parsed.ok ? parsed.value : undefined;
   const loaded = loadRuleset(text);
   const problems: EditorProblem[] = [];
   if (data === undefined) {
@@ -50,21 +48,21 @@ export function checkDraft(text: string, baseApproval: ApprovalBlock): DraftChec
   for (const d of duplicateKeys(text)) {
     problems.push(
       editorProblem(
-        { kind: "ruleset-duplicate", message: `the field "${d.key}" is written twice in this object; a JSON reader keeps only the last one, so remove one of them`, place: { path: d.path } },
+        problem("ruleset-duplicate", `the field "${d.key}" is written twice in this object; a JSON reader keeps only the last one, so remove one of them`, { path: d.path }),
         text,
         d.spot,
       ),
     );
   }
-  const approval = (data as { approval?: unknown } | null)?.approval;
+  const approval = isObject(data) ? data.approval : undefined;
   if (approval !== undefined && !sameApproval(approval, baseApproval) && !sameApproval(approval, EMPTY_APPROVAL)) {
     problems.push(
       editorProblem(
-        {
-          kind: "ruleset-field",
-          message: "the approval block is written only by Approve (from the name, the date and this content's fingerprint); set it back as it was, or clear it (all three null)",
-          place: { path: ["approval"] },
-        },
+        problem(
+          "ruleset-field",
+          "the approval block is written only by Approve (from the name, the date and this content's fingerprint); set it back as it was, or clear it (all three null)",
+          { path: ["approval"] },
+        ),
         text,
       ),
     );

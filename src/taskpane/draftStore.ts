@@ -4,6 +4,7 @@
  * them. A draft is its JSON text exactly as the user left it — valid or not —
  * with what it was opened from. Nothing here touches the stored rulesets.
  */
+import { parseJson } from "./dataPath.js";
 import type { ApprovalBlock } from "./draftCheck.js";
 
 export const DRAFTS_KEY = "loadwright.drafts";
@@ -92,16 +93,14 @@ export class DraftStore {
 }
 
 function parse(text: string): DraftsValue | null {
-  try {
-    const value = JSON.parse(text) as Partial<DraftsValue> | null;
-    if (!value || value.format !== DRAFTS_FORMAT || !Array.isArray(value.drafts)) return null;
-    const ok = value.drafts.every(
-      (d) => d && typeof d.key === "string" && typeof d.text === "string" && d.base && typeof d.base.kind === "string" && typeof d.opened === "string",
-    );
-    return ok ? (value as DraftsValue) : null;
-  } catch {
-    return null;
-  }
+  const parsed = parseJson(text);
+  if (!parsed.ok) return null;
+  const value = parsed.value as Partial<DraftsValue> | null;
+  if (!value || value.format !== DRAFTS_FORMAT || !Array.isArray(value.drafts)) return null;
+  const ok = value.drafts.every(
+    (d) => d && typeof d.key === "string" && typeof d.text === "string" && d.base && typeof d.base.kind === "string" && typeof d.opened === "string",
+  );
+  return ok ? (value as DraftsValue) : null;
 }
 
 /** A key for a new draft, unique in this browser. */

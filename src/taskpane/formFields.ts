@@ -58,7 +58,7 @@ export function fieldShell(fc: FormContext, spec: FieldSpec, control: HTMLElemen
 
 export function textField(fc: FormContext, spec: FieldSpec & { multiline?: boolean; mono?: boolean }): HTMLElement {
   const { doc } = fc;
-  const control = (spec.multiline ? el(doc, "textarea", { rows: "2" }) : el(doc, "input", { type: "text" })) as HTMLInputElement | HTMLTextAreaElement;
+  const control = (spec.multiline ? el(doc, "textarea", { rows: "2" }) : el(doc, "input", { type: "text" }));
   control.value = shownText(getAt(fc.data, spec.path));
   control.spellcheck = !spec.mono;
   control.autocomplete = "off";
@@ -72,7 +72,7 @@ export function textField(fc: FormContext, spec: FieldSpec & { multiline?: boole
 
 export function numberField(fc: FormContext, spec: FieldSpec): HTMLElement {
   const { doc } = fc;
-  const control = el(doc, "input", { type: "text", inputmode: "decimal", autocomplete: "off", spellcheck: "false" }) as HTMLInputElement;
+  const control = el(doc, "input", { type: "text", inputmode: "decimal", autocomplete: "off", spellcheck: "false" });
   control.value = shownText(getAt(fc.data, spec.path));
   control.addEventListener("input", () => {
     setAt(fc.data, spec.path, numberOrText(control.value));
@@ -92,7 +92,7 @@ export function selectField(fc: FormContext, spec: FieldSpec & { options: Option
   const currentText = current === undefined ? "" : shownText(current);
   const options = [...spec.options];
   if (!options.some((o) => o.value === currentText)) options.push({ value: currentText, label: `${currentText} (not a value of the format)` });
-  const control = el(doc, "select", {}, ...options.map((o) => optionOf(doc, o))) as HTMLSelectElement;
+  const control = el(doc, "select", {}, ...options.map((o) => optionOf(doc, o)));
   control.value = currentText;
   control.addEventListener("change", () => {
     const v = control.value;
@@ -104,7 +104,7 @@ export function selectField(fc: FormContext, spec: FieldSpec & { options: Option
 
 /** An option whose value is set even when empty (an empty attribute would make its label the value). */
 export function optionOf(doc: Document, o: Option): HTMLOptionElement {
-  const option = el(doc, "option", {}, o.label) as HTMLOptionElement;
+  const option = el(doc, "option", {}, o.label);
   option.value = o.value;
   return option;
 }
@@ -119,7 +119,7 @@ export function parsedField(
   spec: FieldSpec & { text: string; multiline?: boolean; mono?: boolean; on?: "input" | "change"; read: (text: string) => { problem: string } | { apply: () => void } },
 ): HTMLElement {
   const { doc } = fc;
-  const control = (spec.multiline ? el(doc, "textarea", { rows: "4" }) : el(doc, "input", { type: "text" })) as HTMLInputElement | HTMLTextAreaElement;
+  const control = (spec.multiline ? el(doc, "textarea", { rows: "4" }) : el(doc, "input", { type: "text" }));
   control.value = spec.text;
   control.spellcheck = false;
   control.autocomplete = "off";
@@ -140,7 +140,7 @@ export function parsedField(
 
 /** A small labelled button that says what it acts on, for screen readers too. */
 export function entryButton(doc: Document, text: string, label: string, onClick: () => void, disabled = false): HTMLButtonElement {
-  const b = el(doc, "button", { type: "button", class: "small", "aria-label": label, title: label }, text) as HTMLButtonElement;
+  const b = el(doc, "button", { type: "button", class: "small", "aria-label": label, title: label }, text);
   b.disabled = disabled;
   b.addEventListener("click", onClick);
   return b;

@@ -4,14 +4,16 @@
  * fingerprint; the selected one's details, what to do with it, and its
  * combination list as LW.COMBOS gives it.
  */
-import type { LibraryEntry } from "../addin/rulesetLibrary.js";
-import { comboListOf } from "./comboList.js";
+import { stampLine, type Ruleset, type RulesetFile, type RulesetStatus } from "../core/index.js";
+import { entryOrigin, type LibraryEntry } from "../workbook/rulesetLibrary.js";
+import { comboList } from "./comboList.js";
 import { button, el, uniqueId } from "./dom.js";
 import { exportButtons } from "./exportRuleset.js";
 import { newIdField } from "./newIdField.js";
+import type { Draft } from "./draftStore.js";
 import { draftOfCopy, draftOfStored, draftOfUnloadable } from "./openDraft.js";
 import type { PaneContext } from "./paneContext.js";
-import { approvalBadge, fromMemoryList, sourceLine, verificationBadge } from "./statusText.js";
+import { approvalBadge, coverageLine, fromMemoryBox, sourceLine, verificationBadge } from "./statusText.js";
 
 export function libraryView(ctx: PaneContext): HTMLElement {
   const { doc } = ctx;
@@ -72,59 +74,62 @@ function entryItem(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
 
 function details(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
   const { doc } = ctx;
-  const root = el(doc, "section", { id: "lw-selected", "aria-labelledby": "lw-selected-title" });
-  root.append(el(doc, "h2", { id: "lw-selected-title" }, entry.id));
-  const f = entry.ruleset?.file;
-  const status = entry.status;
-  if (!f || !status) {
-    root.append(
-      el(doc, "p", { class: "problem", id: "lw-selected-problem" }, `This stored ruleset no longer loads: ${entry.problem ?? "unknown problem"}. It is kept as it was stored; formulas naming it show this message. Edit it as a draft to mend it.`),
-      el(
-        doc,
-        "div",
-        { class: "actions" },
-        button(doc, "Edit as a draft", () => {
-          const existing = ctx.drafts.list().find((d) => d.base.kind === "stored" && d.base.id === entry.id);
-          const draft = existing ?? draftOfUnloadable(entry.id, ctx.store().find(entry.id)?.file);
-          if (!existing) ctx.drafts.put(draft);
-          ctx.openDraft = draft.key;
-          ctx.show("editor");
-        }),
-      ),
-    );
-    if (entry.source === "stored") root.append(removeControl(ctx, entry));
-    return root;
+  const root = el(doc, "section", { id: "lw-selected", "aria-labelledby": "lw-selected-title" }, el(doc, "h2", { id: "lw-selected-title" }, entry.id));
+  const { ruleset, status } = entry;
+  if (!ruleset || !status) {
+    root.append(...unloadable(ctx, entry));
+  } else {
+    root.append(...standing(ctx, entry, ruleset, status), ...actions(ctx, entry, ruleset.file), ...combinationList(ctx, entry, ruleset, status));
   }
-  root.append(
+  if (entry.source === "stored") root.insertBefore(removeControl(ctx, entry), root.querySelector("h3"));
+  return root;
+}
+
+/** Opens the stored ruleset (or a draft of it already open) in the editor. */
+function editStored(ctx: PaneContext, entry: LibraryEntry, make: () => Draft): void {
+  const existing = ctx.drafts.list().find((d) => d.base.kind === "stored" && d.base.id === entry.id);
+  const draft = existing ?? make();
+  if (!existing) ctx.drafts.put(draft);
+  ctx.openDraft = draft.key;
+  ctx.show("editor");
+}
+
+/** A stored entry that no longer loads: why, and the way to mend it. */
+function unloadable(ctx: PaneContext, entry: LibraryEntry): HTMLElement[] {
+  const { doc } = ctx;
+  return [
+    el(doc, "p", { class: "problem", id: "lw-selected-problem" }, `This stored ruleset no longer loads: ${entry.problem ?? "unknown problem"}. It is kept as it was stored; formulas naming it show this message. Edit it as a draft to mend it.`),
+    el(doc, "div", { class: "actions" }, button(doc, "Edit as a draft", () => editStored(ctx, entry, () => draftOfUnloadable(entry.id, ctx.store().find(entry.id)?.file)))),
+  ];
+}
+
+/** Identity, verification and approval, how much its sources confirm, what is from memory, fingerprint, source, notes. */
+function standing(ctx: PaneContext, entry: LibraryEntry, ruleset: Ruleset, status: RulesetStatus): HTMLElement[] {
+  const { doc } = ctx;
+  const f = ruleset.file;
+  return [
     el(doc, "p", { class: "entry-title" }, f.title),
     el(doc, "p", {}, `${f.standard.name} ${f.standard.edition}${f.standard.clauses ? ` — ${f.standard.clauses}` : ""}`, f.basis ? ` · ${f.basis}` : "", ` · version ${f.version}`),
     el(doc, "p", { class: "badges" }, verificationBadge(doc, status), " ", approvalBadge(doc, f, status)),
     el(doc, "p", { id: "lw-selected-summary" }, status.summary),
-  );
-  if (status.verification === "unverified") {
-    root.append(el(doc, "div", { class: "alarm-box" }, el(doc, "p", {}, "From memory — verify against the standard before use:"), fromMemoryList(doc, f)));
-  }
-  if (f.approval.note) root.append(el(doc, "p", {}, `Approval note: ${f.approval.note}`));
-  root.append(
+    coverageLine(doc, status, "lw-selected-coverage"),
+    ...(status.verification === "unverified" ? [fromMemoryBox(doc, f)] : []),
+    ...(f.approval.note ? [el(doc, "p", {}, `Approval note: ${f.approval.note}`)] : []),
     el(doc, "p", {}, "Fingerprint ", el(doc, "span", { class: "fingerprint", id: "lw-selected-fingerprint" }, status.fingerprint)),
     el(doc, "p", {}, sourceLine(entry, ctx.storedWhere)),
-  );
-  for (const note of f.notes ?? []) root.append(el(doc, "p", { class: "note" }, note));
+    ...(f.notes ?? []).map((note) => el(doc, "p", { class: "note" }, note)),
+  ];
+}
 
-  const actions = el(doc, "div", { class: "actions" });
-  if (entry.source === "stored") {
-    actions.append(
-      button(doc, "Edit as a draft", () => {
-        const existing = ctx.drafts.list().find((d) => d.base.kind === "stored" && d.base.id === entry.id);
-        const draft = existing ?? draftOfStored(entry);
-        if (!existing) ctx.drafts.put(draft);
-        ctx.openDraft = draft.key;
-        ctx.show("editor");
-      }),
-    );
-  }
+/** What can be done with a ruleset that loads: edit (stored), copy, approve, compare, export. */
+function actions(ctx: PaneContext, entry: LibraryEntry, file: RulesetFile): HTMLElement[] {
+  const { doc } = ctx;
   const copyForm = copyControl(ctx, entry);
-  actions.append(
+  const row = el(
+    doc,
+    "div",
+    { class: "actions" },
+    entry.source === "stored" ? button(doc, "Edit as a draft", () => editStored(ctx, entry, () => draftOfStored(entry))) : null,
     button(doc, "Open a copy…", () => {
       copyForm.hidden = false;
       copyForm.querySelector("input")?.focus();
@@ -135,25 +140,28 @@ function details(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
       ctx.comparePair = { before: entry.shippedFingerprint ? `shipped:${entry.id}` : mine, after: mine };
       ctx.show("compare");
     }),
-    ...exportButtons(ctx, f),
+    ...exportButtons(ctx, file),
   );
-  root.append(actions, copyForm);
-  if (entry.source === "stored") root.append(removeControl(ctx, entry));
+  return [row, copyForm];
+}
 
+/** The combination list for the parameters typed, under the same stamp a formula's result carries. */
+function combinationList(ctx: PaneContext, entry: LibraryEntry, ruleset: Ruleset, status: RulesetStatus): HTMLElement[] {
+  const { doc } = ctx;
   const paramsId = uniqueId("lw-params");
-  const params = el(doc, "input", { id: "lw-params", type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": paramsId }) as HTMLInputElement;
+  const params = el(doc, "input", { id: "lw-params", type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": paramsId });
   const combos = el(doc, "div", { id: "lw-combos" });
-  const renderCombos = () => combos.replaceChildren(...comboListOf(doc, entry.id, params.value));
-  params.addEventListener("change", renderCombos);
-  root.append(
+  const stamp = stampLine(ruleset.file, status, entryOrigin(entry, ctx.storedWhere));
+  const render = () => combos.replaceChildren(...comboList(doc, ruleset, params.value, { tableId: "lw-combo-table", stamp }));
+  params.addEventListener("change", render);
+  render();
+  return [
     el(doc, "h3", {}, "Combination list"),
     el(doc, "label", { for: "lw-params" }, "Parameters"),
     params,
     el(doc, "p", { id: paramsId, class: "hint" }, "e.g. SDS=1.2; rho=1.3 — empty: the ruleset's defaults. Press Enter to apply."),
     combos,
-  );
-  renderCombos();
-  return root;
+  ];
 }
 
 /** "Open a copy…": the id the copy will have, chosen by the user and checked before the draft opens. */

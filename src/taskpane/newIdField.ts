@@ -23,7 +23,7 @@ export function newIdField(
   makeDraft: (id: string) => Draft,
 ): NewIdField {
   const { doc } = ctx;
-  const input = el(doc, "input", { id: ids.input, type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": ids.problem, ...attributes }) as HTMLInputElement;
+  const input = el(doc, "input", { id: ids.input, type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": ids.problem, ...attributes });
   const problem = el(doc, "p", { id: ids.problem, class: "field-problem", role: "alert" });
   const submit = () => {
     const id = input.value.trim();

@@ -5,7 +5,8 @@
  * copy is another content), an import, or a new ruleset from a small template.
  */
 import { RULESET_FORMAT, RULESET_ID_PATTERN, shortFingerprint, withoutApproval, type RulesetFile } from "../core/index.js";
-import type { LibraryEntry } from "../addin/rulesetLibrary.js";
+import type { LibraryEntry } from "../workbook/rulesetLibrary.js";
+import { isObject, topField } from "./dataPath.js";
 import { EMPTY_APPROVAL, type ApprovalBlock } from "./draftCheck.js";
 import { newDraftKey, type Draft, type DraftBase } from "./draftStore.js";
 import { todayText } from "./dom.js";
@@ -36,8 +37,14 @@ export function draftOfStored(entry: LibraryEntry, now = new Date()): Draft {
  * The approval it carries, if any, stays (it names the content that was approved).
  */
 export function draftOfUnloadable(id: string, stored: unknown, now = new Date()): Draft {
-  const approval = (stored as { approval?: unknown } | null)?.approval;
-  return draft(rulesetText(stored), { kind: "stored", id, fingerprint: null, approval: approval && typeof approval === "object" ? (approval as ApprovalBlock) : EMPTY_APPROVAL }, now);
+  const approval = isObject(stored) ? stored.approval : undefined;
+  return draft(rulesetText(stored), { kind: "stored", id, fingerprint: null, approval: isObject(approval) ? (approval as ApprovalBlock) : EMPTY_APPROVAL }, now);
+}
+
+/** The approval block a ruleset's text carries, as it is, or none. */
+export function approvalIn(text: string): ApprovalBlock {
+  const a = topField(text, "approval");
+  return isObject(a) ? (a as ApprovalBlock) : EMPTY_APPROVAL;
 }
 
 /** Why an id cannot name a new copy, or null when it can. */
@@ -60,13 +67,8 @@ export function draftOfCopy(entry: LibraryEntry, id: string, now = new Date()): 
 
 /** Imported text as a draft, exactly as given (it may not load yet: the editor shows where). */
 export function draftOfImport(text: string, now = new Date()): Draft {
-  let approval: ApprovalBlock = EMPTY_APPROVAL;
-  try {
-    const a = (JSON.parse(text) as { approval?: ApprovalBlock } | null)?.approval;
-    if (a && typeof a === "object") approval = a;
-  } catch {
-    // Not JSON: the editor says where.
-  }
+  // Text that is not JSON yet carries no approval: the editor says where it breaks.
+  const approval = approvalIn(text);
   return draft(text.endsWith("\n") ? text : `${text}\n`, { kind: "imported", id: null, fingerprint: null, approval }, now);
 }
 

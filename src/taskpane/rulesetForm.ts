@@ -5,12 +5,21 @@
  * field of the wrong type typed in the text view) is left in the draft as it
  * is and its problem is shown at the nearest field.
  */
-import { formatPath, NAME_PATTERN } from "../core/index.js";
-import { isObject, renameKey, shownText, type JsonObject } from "./dataPath.js";
-import { button, el } from "./dom.js";
-import { entryButton, fieldShell, numberField, optionOf, parsedField, selectField, textField, type FormContext } from "./formFields.js";
-
-/** The file format's rule for symbol, parameter and value names (docs/rulesets.md, "Rulesets"). */
+import {
+  caseModeSchema,
+  DECIMAL_TEXT,
+  DEFAULT_ORTHOGONAL_SHARE,
+  formatPath,
+  NAME_PATTERN,
+  PARAMETER_TYPES,
+  permanenceSchema,
+  provenanceStatusSchema,
+  SYMBOL_DEFAULTS,
+  type CaseMode,
+} from "../core/index.js";
+import { isObject, parseJson, renameKey, shownText, type JsonObject } from "./dataPath.js";
+import { button, el, type Child } from "./dom.js";
+import { entryButton, fieldShell, numberField, optionOf, parsedField, selectField, textField, type FormContext, type Option } from "./formFields.js";
 
 export function rulesetForm(fc: FormContext): HTMLElement {
   const { doc } = fc;
@@ -39,13 +48,38 @@ function section(fc: FormContext, key: string, title: string, path: string, ...c
     el(doc, "summary", {}, title, el(doc, "span", { class: "section-problems" })),
     el(doc, "div", { class: "field-problem", "data-problem-for": path }),
     ...children,
-  ) as HTMLDetailsElement;
+  );
   details.open = fc.openSections.has(key);
   details.addEventListener("toggle", () => {
     if (details.open) fc.openSections.add(key);
     else fc.openSections.delete(key);
   });
   return details;
+}
+
+/**
+ * One entry of a list section (a combination, a symbol, a parameter, a source):
+ * its name and tools in a head line, a slot for problems with the entry as a
+ * whole, then its fields.
+ */
+function entryItem(fc: FormContext, path: string, name: HTMLElement, tools: HTMLElement[], ...body: Child[]): HTMLElement {
+  const { doc } = fc;
+  return el(
+    doc,
+    "li",
+    { class: "entry", "data-path": path },
+    el(doc, "div", { class: "entry-head" }, name, el(doc, "span", { class: "entry-tools" }, ...tools)),
+    el(doc, "div", { class: "field-problem", "data-problem-for": path }),
+    ...body,
+  );
+}
+
+function entryName(doc: Document, text: string, mono = false): HTMLElement {
+  return el(doc, "span", { class: mono ? "entry-name mono" : "entry-name" }, text);
+}
+
+function entryFields(doc: Document, ...fields: HTMLElement[]): HTMLElement {
+  return el(doc, "div", { class: "entry-fields" }, ...fields);
 }
 
 function identitySection(fc: FormContext): HTMLElement {
@@ -70,8 +104,8 @@ function notAList(doc: Document, what: string): HTMLElement {
 
 function combinationsSection(fc: FormContext): HTMLElement {
   const { doc, data } = fc;
-  const list = data.combinations;
-  if (!Array.isArray(list)) return section(fc, "combinations", "Combinations", "combinations", notAList(doc, "combinations"));
+  if (!Array.isArray(data.combinations)) return section(fc, "combinations", "Combinations", "combinations", notAList(doc, "combinations"));
+  const list: unknown[] = data.combinations;
   const items = list.map((c, i) => {
     const where = `combination ${i + 1}${isObject(c) && typeof c.id === "string" && c.id !== "" ? ` (${c.id})` : ""}`;
     const move = (to: number, direction: string) => () => {
@@ -79,33 +113,21 @@ function combinationsSection(fc: FormContext): HTMLElement {
       list.splice(to, 0, moved);
       fc.rebuild(`[data-path="combinations[${to}]"] button[data-move="${direction}"]`);
     };
-    return el(
-      doc,
-      "li",
-      { class: "entry", "data-path": `combinations[${i}]` },
-      el(
-        doc,
-        "div",
-        { class: "entry-head" },
-        el(doc, "span", { class: "entry-name" }, `Combination ${i + 1}`),
-        el(
-          doc,
-          "span",
-          { class: "entry-tools" },
-          marked(entryButton(doc, "↑", `Move ${where} up`, move(i - 1, "up"), i === 0), "up"),
-          marked(entryButton(doc, "↓", `Move ${where} down`, move(i + 1, "down"), i === list.length - 1), "down"),
-          entryButton(doc, "✕", `Remove ${where}`, () => {
-            list.splice(i, 1);
-            fc.rebuild(`[data-path="combinations[${Math.min(i, list.length - 1)}]"] input`);
-          }),
-        ),
-      ),
-      el(doc, "div", { class: "field-problem", "data-problem-for": `combinations[${i}]` }),
+    return entryItem(
+      fc,
+      `combinations[${i}]`,
+      entryName(doc, `Combination ${i + 1}`),
+      [
+        marked(entryButton(doc, "↑", `Move ${where} up`, move(i - 1, "up"), i === 0), "up"),
+        marked(entryButton(doc, "↓", `Move ${where} down`, move(i + 1, "down"), i === list.length - 1), "down"),
+        entryButton(doc, "✕", `Remove ${where}`, () => {
+          list.splice(i, 1);
+          fc.rebuild(`[data-path="combinations[${Math.min(i, list.length - 1)}]"] input`);
+        }),
+      ],
       isObject(c)
-        ? el(
+        ? entryFields(
             doc,
-            "div",
-            { class: "entry-fields" },
             textField(fc, { label: "Id", path: ["combinations", i, "id"], mono: true, className: "narrow" }),
             textField(fc, { label: "Expression", path: ["combinations", i, "expression"], mono: true }),
             textField(fc, { label: "Clause", path: ["combinations", i, "clause"] }),
@@ -166,7 +188,7 @@ function cssPath(path: (string | number)[]): string {
 function addNamed(fc: FormContext, record: JsonObject, recordPath: string, what: string, make: () => JsonObject): HTMLElement {
   const { doc } = fc;
   const id = `lw-add-${recordPath}`;
-  const input = el(doc, "input", { id, type: "text", class: "mono", autocomplete: "off", spellcheck: "false" }) as HTMLInputElement;
+  const input = el(doc, "input", { id, type: "text", class: "mono", autocomplete: "off", spellcheck: "false" });
   const problem = el(doc, "p", { class: "field-problem", role: "alert" });
   const add = () => {
     const name = input.value.trim();
@@ -195,11 +217,35 @@ function removeNamed(fc: FormContext, record: JsonObject, name: string, what: st
   });
 }
 
-const OPTIONAL_BOOLEAN = (absent: string) => [
+const yesNo = (v: boolean) => (v ? "yes" : "no");
+
+const OPTIONAL_BOOLEAN = (absent: string): Option[] => [
   { value: "", label: `(not written: ${absent})` },
   { value: "true", label: "yes" },
   { value: "false", label: "no" },
 ];
+
+/** What each case mode does, in a line; every mode of the format must have one. */
+const CASE_MODE_WORDS: Readonly<Record<CaseMode, string>> = {
+  sum: "all act together",
+  each: "one at a time",
+  orthogonal: "each leading, others at the share",
+  independent: "all act, each taking the term's factors on its own",
+};
+
+/** The case modes the format knows (read off its schema), and what leaving the field out means. */
+const CASE_MODE_OPTIONS: Option[] = [
+  { value: "", label: `(not written: ${SYMBOL_DEFAULTS.permanent.cases} if permanent, ${SYMBOL_DEFAULTS.transient.cases} if transient)` },
+  ...caseModeSchema.options.map((m) => ({ value: m, label: `${m}: ${CASE_MODE_WORDS[m]}` })),
+];
+
+const PERMANENCE_OPTIONS: Option[] = permanenceSchema.options.map((p) => ({ value: p, label: p }));
+
+/** A provenance status as the form words it; every status of the format must have one. */
+const PROVENANCE_STATUS_WORDS: Readonly<Record<(typeof provenanceStatusSchema.options)[number], string>> = {
+  confirmed: "confirmed: checked against this source",
+  "from-memory": "from memory: to be verified (shows UNVERIFIED)",
+};
 
 function symbolsSection(fc: FormContext): HTMLElement {
   const { doc, data } = fc;
@@ -207,33 +253,32 @@ function symbolsSection(fc: FormContext): HTMLElement {
   if (!isObject(symbols)) return section(fc, "symbols", "Load symbols", "symbols", notAList(doc, "symbols"));
   const items = Object.entries(symbols).map(([name, s]) => {
     const p = (field: string) => ["symbols", name, field];
-    return el(
-      doc,
-      "li",
-      { class: "entry", "data-path": formatPath(["symbols", name]) },
-      el(doc, "div", { class: "entry-head" }, el(doc, "span", { class: "entry-name mono" }, name), el(doc, "span", { class: "entry-tools" }, removeNamed(fc, symbols, name, "symbol", "symbols"))),
-      el(doc, "div", { class: "field-problem", "data-problem-for": formatPath(["symbols", name]) }),
+    return entryItem(
+      fc,
+      formatPath(["symbols", name]),
+      entryName(doc, name, true),
+      [removeNamed(fc, symbols, name, "symbol", "symbols")],
       isObject(s)
-        ? el(
+        ? entryFields(
             doc,
-            "div",
-            { class: "entry-fields" },
             nameField(fc, symbols, name, "symbols", "symbol"),
             textField(fc, { label: "Description", path: p("description") }),
-            selectField(fc, { label: "Permanence", path: p("permanence"), options: [{ value: "permanent", label: "permanent" }, { value: "transient", label: "transient" }] }),
-            selectField(fc, { label: "Acts both ways (reversible)", path: p("reversible"), options: OPTIONAL_BOOLEAN("no"), parse: (v) => v === "true" }),
-            selectField(fc, {
-              label: "Several cases in a table",
-              path: p("cases"),
-              options: [
-                { value: "", label: "(not written: sum if permanent, each if transient)" },
-                { value: "sum", label: "sum: all act together" },
-                { value: "each", label: "each: one at a time" },
-                { value: "orthogonal", label: "orthogonal: each leading, others at the share" },
-              ],
+            selectField(fc, { label: "Permanence", path: p("permanence"), options: PERMANENCE_OPTIONS }),
+            selectField(fc, { label: "Acts both ways (reversible)", path: p("reversible"), options: OPTIONAL_BOOLEAN(yesNo(SYMBOL_DEFAULTS.transient.reversible)), parse: (v) => v === "true" }),
+            selectField(fc, { label: "Several cases in a table", path: p("cases"), options: CASE_MODE_OPTIONS }),
+            textField(fc, {
+              label: "Orthogonal share",
+              path: p("orthogonalShare"),
+              optional: true,
+              mono: true,
+              hint: `a number (${DEFAULT_ORTHOGONAL_SHARE} if not written) or a parameter name; only with orthogonal`,
             }),
-            textField(fc, { label: "Orthogonal share", path: p("orthogonalShare"), optional: true, mono: true, hint: "a number (0.3 if not written) or a parameter name; only with orthogonal" }),
-            selectField(fc, { label: "May be absent where that is worse", path: p("canBeAbsent"), options: OPTIONAL_BOOLEAN("transient yes, permanent no"), parse: (v) => v === "true" }),
+            selectField(fc, {
+              label: "May be absent where that is worse",
+              path: p("canBeAbsent"),
+              options: OPTIONAL_BOOLEAN(`transient ${yesNo(SYMBOL_DEFAULTS.transient.canBeAbsent)}, permanent ${yesNo(SYMBOL_DEFAULTS.permanent.canBeAbsent)}`),
+              parse: (v) => v === "true",
+            }),
             attributesField(fc, s, name),
           )
         : notAList(doc, `fields of symbol ${name}`),
@@ -275,9 +320,9 @@ function attributesField(fc: FormContext, symbol: JsonObject, name: string): HTM
         const value = piece.slice(eq + 1).trim();
         if (!NAME_PATTERN.test(key)) return { problem: `character ${at}: "${key}" is not a name (${SYMBOL_NAME_HINT})` };
         if (key in out) return { problem: `character ${at}: ${key} is given twice` };
-        if (/^[+-]?(\d+(\.\d*)?|\.\d+)$/.test(value)) out[key] = Number(value);
+        if (DECIMAL_TEXT.test(value)) out[key] = Number(value);
         else if (NAME_PATTERN.test(value)) out[key] = value;
-        else return { problem: `character ${start + eq + 2}: "${value}" is neither a number (with a decimal point) nor a parameter name` };
+        else return { problem: `character ${start + eq + 2}: "${value}" is neither a number (1.5, 0.5, 1e3) nor a parameter name` };
       }
       return {
         apply: () => {
@@ -319,13 +364,12 @@ function parametersSection(fc: FormContext): HTMLElement {
         );
       }
     }
-    return el(
-      doc,
-      "li",
-      { class: "entry", "data-path": formatPath(["parameters", name]) },
-      el(doc, "div", { class: "entry-head" }, el(doc, "span", { class: "entry-name mono" }, name), el(doc, "span", { class: "entry-tools" }, removeNamed(fc, parameters, name, "parameter", "parameters"))),
-      el(doc, "div", { class: "field-problem", "data-problem-for": formatPath(["parameters", name]) }),
-      isObject(p) ? el(doc, "div", { class: "entry-fields" }, ...fields) : notAList(doc, `fields of parameter ${name}`),
+    return entryItem(
+      fc,
+      formatPath(["parameters", name]),
+      entryName(doc, name, true),
+      [removeNamed(fc, parameters, name, "parameter", "parameters")],
+      isObject(p) ? entryFields(doc, ...fields) : notAList(doc, `fields of parameter ${name}`),
     );
   });
   return section(
@@ -345,16 +389,15 @@ function parametersSection(fc: FormContext): HTMLElement {
 function kindField(fc: FormContext, parameters: JsonObject, name: string, p: JsonObject): HTMLElement {
   const { doc } = fc;
   const path = ["parameters", name, "type"];
-  const kinds = ["number", "choice"];
   const current = shownText(p.type);
+  const words: Record<string, string> = { number: "number", choice: "choice (a named set of values, such as a category)" };
   const control = el(
     doc,
     "select",
     {},
-    ...(kinds.includes(current) ? [] : [optionOf(doc, { value: current, label: `${current || "(none)"} (not a kind of the format)` })]),
-    optionOf(doc, { value: "number", label: "number" }),
-    optionOf(doc, { value: "choice", label: "choice (a named set of values, such as a category)" }),
-  ) as HTMLSelectElement;
+    ...(PARAMETER_TYPES.includes(current) ? [] : [optionOf(doc, { value: current, label: `${current || "(none)"} (not a kind of the format)` })]),
+    ...PARAMETER_TYPES.map((t) => optionOf(doc, { value: t, label: words[t] ?? t })),
+  );
   control.value = current;
   control.addEventListener("change", () => {
     const description = p.description ?? "";
@@ -372,14 +415,14 @@ function allowedField(fc: FormContext, p: JsonObject, name: string): HTMLElement
     path: ["parameters", name, "allowed"],
     text: Array.isArray(p.allowed) ? p.allowed.map(shownText).join(", ") : shownText(p.allowed),
     mono: true,
-    hint: "numbers with a decimal point, separated by ', ' or ';' — empty: any value in range",
+    hint: "numbers (decimals with a point), separated by ', ' or ';' — empty: any value in range",
     read: (typed) => {
       if (/\d,\d/.test(typed)) return { problem: `"${/\d,\d/.exec(typed)?.[0] ?? ""}": write decimals with a point and separate values with ", " or ";"` };
       const items = typed.split(/[,;]/).map((t) => t.trim()).filter((t) => t !== "");
       return {
         apply: () => {
           if (items.length === 0) delete p.allowed;
-          else p.allowed = items.map((t) => (/^[+-]?(\d+(\.\d*)?|\.\d+)$/.test(t) ? Number(t) : t));
+          else p.allowed = items.map((t) => (DECIMAL_TEXT.test(t) ? Number(t) : t));
           fc.changed();
         },
       };
@@ -396,17 +439,14 @@ function choicesField(fc: FormContext, p: JsonObject, name: string): HTMLElement
     multiline: true,
     mono: true,
     read: (typed) => {
-      try {
-        const value: unknown = JSON.parse(typed);
-        return {
-          apply: () => {
-            p.choices = value;
-            fc.changed();
-          },
-        };
-      } catch (e) {
-        return { problem: `not JSON: ${e instanceof Error ? e.message : String(e)}` };
-      }
+      const parsed = parseJson(typed);
+      if (!parsed.ok) return { problem: `not JSON: ${parsed.reason}` };
+      return {
+        apply: () => {
+          p.choices = parsed.value;
+          fc.changed();
+        },
+      };
     },
   });
 }
@@ -416,14 +456,16 @@ function notesSection(fc: FormContext): HTMLElement {
   if (data.notes !== undefined && !Array.isArray(data.notes)) return section(fc, "notes", "Notes", "notes", notAList(doc, "notes"));
   const notes: unknown[] = Array.isArray(data.notes) ? data.notes : [];
   const items = notes.map((_, i) =>
-    el(
-      doc,
-      "li",
-      { class: "entry", "data-path": `notes[${i}]` },
-      el(doc, "div", { class: "entry-head" }, el(doc, "span", { class: "entry-name" }, `Note ${i + 1}`), el(doc, "span", { class: "entry-tools" }, entryButton(doc, "✕", `Remove note ${i + 1}`, () => {
-        notes.splice(i, 1);
-        fc.rebuild("#lw-add-note");
-      }))),
+    entryItem(
+      fc,
+      `notes[${i}]`,
+      entryName(doc, `Note ${i + 1}`),
+      [
+        entryButton(doc, "✕", `Remove note ${i + 1}`, () => {
+          notes.splice(i, 1);
+          fc.rebuild("#lw-add-note");
+        }),
+      ],
       textField(fc, { label: `Note ${i + 1}`, path: ["notes", i], multiline: true }),
     ),
   );
@@ -447,29 +489,27 @@ function provenanceSection(fc: FormContext): HTMLElement {
   if (!Array.isArray(list)) return section(fc, "provenance", "Provenance", "provenance", notAList(doc, "provenance"));
   const items = list.map((_, i) => {
     const path = (field: string) => ["provenance", i, field];
-    return el(
-      doc,
-      "li",
-      { class: "entry", "data-path": `provenance[${i}]` },
-      el(doc, "div", { class: "entry-head" }, el(doc, "span", { class: "entry-name" }, `Source ${i + 1}`), el(doc, "span", { class: "entry-tools" }, entryButton(doc, "✕", `Remove source ${i + 1}`, () => {
-        list.splice(i, 1);
-        fc.rebuild("#lw-add-source");
-      }))),
-      el(doc, "div", { class: "field-problem", "data-problem-for": `provenance[${i}]` }),
-      el(
+    return entryItem(
+      fc,
+      `provenance[${i}]`,
+      entryName(doc, `Source ${i + 1}`),
+      [
+        entryButton(doc, "✕", `Remove source ${i + 1}`, () => {
+          list.splice(i, 1);
+          fc.rebuild("#lw-add-source");
+        }),
+      ],
+      entryFields(
         doc,
-        "div",
-        { class: "entry-fields" },
         textField(fc, { label: "Source (standard, edition, clause or page)", path: path("source"), multiline: true }),
+        textField(fc, { label: "Where a checker finds it (title, issuing body, address, clause)", path: path("locator"), optional: true, multiline: true }),
         selectField(fc, {
           label: "Status",
           path: path("status"),
-          options: [
-            { value: "confirmed", label: "confirmed: checked against this source" },
-            { value: "from-memory", label: "from memory: to be verified (shows UNVERIFIED)" },
-          ],
+          options: provenanceStatusSchema.options.map((v) => ({ value: v, label: PROVENANCE_STATUS_WORDS[v] })),
         }),
         textField(fc, { label: "Covers", path: path("covers"), multiline: true }),
+        combinationIdsField(fc, i),
         textField(fc, { label: "Note", path: path("note"), optional: true }),
       ),
     );
@@ -486,6 +526,33 @@ function provenanceSection(fc: FormContext): HTMLElement {
       fc.rebuild(`[data-control-for="provenance[${list.length - 1}].source"]`);
     }, { id: "lw-add-source" }),
   );
+}
+
+/** "1, 2, 5": the ids of the combinations a source vouches for (or, from memory, leaves open); empty: not written. */
+function combinationIdsField(fc: FormContext, index: number): HTMLElement {
+  const entry = (fc.data.provenance as unknown[])[index];
+  const current = isObject(entry) ? entry.combinations : undefined;
+  return parsedField(fc, {
+    label: "Combinations it covers (ids)",
+    path: ["provenance", index, "combinations"],
+    text: Array.isArray(current) ? current.map(shownText).join(", ") : shownText(current),
+    mono: true,
+    hint: "combination ids separated by ',' — empty: not listed",
+    read: (typed) => {
+      const ids = typed
+        .split(",")
+        .map((t) => t.trim())
+        .filter((t) => t !== "");
+      return {
+        apply: () => {
+          if (!isObject(entry)) return fc.changed();
+          if (ids.length === 0) delete entry.combinations;
+          else entry.combinations = ids;
+          fc.changed();
+        },
+      };
+    },
+  });
 }
 
 function approvalSection(fc: FormContext): HTMLElement {

@@ -1,46 +1,48 @@
 /**
- * The words the pane shows for a ruleset's standing: verification first
- * (UNVERIFIED in capitals, never only a colour), then the approval with who
- * and when, then where the ruleset comes from. The same words as the formula
- * stamps (src/functions/stamp.ts), written out in full where the pane has room.
+ * A ruleset's standing as the pane shows it, in the catalogue's words
+ * (core/text): verification first (UNVERIFIED in capitals, never only a
+ * colour), then the approval with who and when, then where the ruleset comes
+ * from, how many combinations a source confirms and what is from memory.
  */
-import type { RulesetFile, RulesetStatus } from "../core/index.js";
-import { verificationWord } from "../functions/stamp.js";
-import type { LibraryEntry } from "../addin/rulesetLibrary.js";
+import {
+  coverageText,
+  FROM_MEMORY_LEAD,
+  fromMemoryText,
+  sourceText,
+  statusText,
+  type RulesetFile,
+  type RulesetStatus,
+} from "../core/index.js";
+import { entryOrigin, type LibraryEntry } from "../workbook/rulesetLibrary.js";
 import { el } from "./dom.js";
 
-/** "approved by A. Name on 2026-01-31", "APPROVAL VOID: CHANGED since approval by …", "not approved". */
+/** What the verification badge says where a stored ruleset no longer loads. */
+export const DOES_NOT_LOAD = "DOES NOT LOAD";
+
+/** The approval as the pane's badge words it: "approved by A. Name on 2026-01-31", "APPROVAL VOID: CHANGED since approval by …". */
 export function approvalLine(file: RulesetFile, status: RulesetStatus): string {
-  const { approvedBy, date } = file.approval;
-  const by = `by ${approvedBy ?? "(no name)"} on ${date ?? "(no date)"}`;
-  switch (status.approval) {
-    case "approved":
-      return `approved ${by}`;
-    case "changed-since-approval":
-      return `APPROVAL VOID: CHANGED since approval ${by}`;
-    case "not-approved":
-      return "not approved";
-  }
+  return statusText(status, file.approval).approval.badge;
 }
 
 /** Where a library entry comes from, in words; a stored copy of a shipped id says whether it differs. */
 export function sourceLine(entry: LibraryEntry, storedWhere: string): string {
-  if (entry.source === "shipped") return "shipped with Loadwright";
-  if (entry.shippedFingerprint === null) return `stored in ${storedWhere}`;
-  if (entry.status && entry.status.fingerprint === entry.shippedFingerprint) return `stored in ${storedWhere}: a copy of the shipped ruleset, same content`;
-  return `stored in ${storedWhere}: DIFFERS from the shipped ruleset of the same id`;
+  return sourceText(entryOrigin(entry, storedWhere), "line");
+}
+
+/** The verification badge's words: "⚠ UNVERIFIED", "Checked", or DOES NOT LOAD for a stored entry that no longer loads. */
+export function verificationBadgeText(status: RulesetStatus | null): string {
+  return status ? statusText(status, { approvedBy: null, date: null }).badge : DOES_NOT_LOAD;
 }
 
 /** The verification badge: a word a reader cannot miss, with the status summary as its title. */
 export function verificationBadge(doc: Document, status: RulesetStatus | null): HTMLElement {
-  if (!status) return el(doc, "span", { class: "badge badge-alarm", "data-verification": "invalid" }, "DOES NOT LOAD");
-  const word = verificationWord(status);
+  if (!status) return el(doc, "span", { class: "badge badge-alarm", "data-verification": "invalid" }, DOES_NOT_LOAD);
   const alarm = status.verification !== "checked";
   return el(
     doc,
     "span",
     { class: alarm ? "badge badge-alarm" : "badge badge-ok", "data-verification": status.verification, title: status.summary },
-    alarm ? `⚠ ${word}` : word,
+    verificationBadgeText(status),
   );
 }
 
@@ -51,13 +53,16 @@ export function approvalBadge(doc: Document, file: RulesetFile, status: RulesetS
 
 /** For a ruleset named in a list (a select's option): " — UNVERIFIED" where it is, so no choice hides it. */
 export function unverifiedSuffix(status: RulesetStatus | null): string {
-  return status?.verification === "unverified" ? " — UNVERIFIED" : "";
+  return status ? statusText(status, { approvedBy: null, date: null }).listMark : "";
 }
 
-/** What an UNVERIFIED ruleset's provenance marks as from memory, one line per source. */
-export function fromMemoryList(doc: Document, file: RulesetFile): HTMLElement {
-  const items = file.provenance
-    .filter((p) => p.status === "from-memory")
-    .map((p) => el(doc, "li", {}, el(doc, "strong", {}, p.source), ` — covers: ${p.covers}`, p.note ? ` (${p.note})` : ""));
-  return el(doc, "ul", { class: "from-memory" }, ...items);
+/** How many combinations a source confirms: "5 of 7 combinations confirmed; not confirmed: 3, 4". */
+export function coverageLine(doc: Document, status: RulesetStatus, id: string): HTMLElement {
+  return el(doc, "p", { class: "coverage", id }, coverageText(status.combinations));
+}
+
+/** What an UNVERIFIED ruleset's provenance marks as from memory, one line per source, under the catalogue's lead. */
+export function fromMemoryBox(doc: Document, file: RulesetFile, ...more: HTMLElement[]): HTMLElement {
+  const items = file.provenance.filter((p) => p.status === "from-memory").map((p) => el(doc, "li", {}, fromMemoryText(p), p.note ? ` — ${p.note}` : ""));
+  return el(doc, "div", { class: "alarm-box from-memory-box" }, el(doc, "p", {}, FROM_MEMORY_LEAD), el(doc, "ul", { class: "from-memory" }, ...items), ...more);
 }

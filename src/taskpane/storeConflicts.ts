@@ -6,7 +6,7 @@
  * stand in for.
  */
 import { shortFingerprint, shippedRulesets, type Ruleset } from "../core/index.js";
-import type { Library } from "../addin/rulesetLibrary.js";
+import type { Library } from "../workbook/rulesetLibrary.js";
 import type { DraftBase } from "./draftStore.js";
 
 export interface StoreConflicts {

@@ -5,21 +5,21 @@
  * copies), Compare, Approve, and Import / export. Views are plain DOM, built
  * from the shared state each time they are shown.
  */
-import { CAUTIONS } from "../addin/cautions.js";
-import { storeLocation } from "../addin/rulesetLibrary.js";
+import { fullCautions } from "../core/index.js";
+import type { RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import { approveView } from "./approveView.js";
 import { compareView } from "./compareView.js";
 import { el } from "./dom.js";
 import { DraftStore } from "./draftStore.js";
 import { editorView } from "./editorView.js";
 import { libraryView } from "./libraryView.js";
-import { storeFunctions, type PaneContext, type ViewName } from "./paneContext.js";
+import { libraryFunctions, type PaneContext, type ViewName } from "./paneContext.js";
 import { transferView } from "./transferView.js";
-
-export { MAX_PANE_ROWS } from "./comboList.js";
 
 export interface PaneOptions {
   inExcel: boolean;
+  /** The rulesets formulas can name: the pane lists, stores and approves them here. */
+  library: RulesetLibrary;
   /** Where drafts are kept; the browser's local storage unless given. */
   draftStorage?: Storage | null;
 }
@@ -33,11 +33,15 @@ const VIEWS: { name: ViewName; label: string; render: (ctx: PaneContext) => HTML
 ];
 
 export function startTaskPane(doc: Document, options: PaneOptions): void {
-  const $ = (id: string) => doc.getElementById(id) as HTMLElement;
+  const $ = (id: string): HTMLElement => {
+    const found = doc.getElementById(id);
+    if (!found) throw new Error(`taskpane.html has no #${id}`);
+    return found;
+  };
   $("lw-mode").textContent = options.inExcel
-    ? `In Excel: formulas LW.* are available; stored rulesets live in ${storeLocation()}.`
-    : `In a browser (demo, no Excel): stored rulesets live in ${storeLocation()}.`;
-  $("lw-cautions").replaceChildren(...CAUTIONS.map((text) => el(doc, "p", {}, text)));
+    ? `In Excel: formulas LW.* are available; stored rulesets live in ${options.library.where}.`
+    : `In a browser (demo, no Excel): stored rulesets live in ${options.library.where}.`;
+  $("lw-cautions").replaceChildren(...fullCautions().map((text) => el(doc, "p", {}, text)));
 
   const storage = options.draftStorage !== undefined ? options.draftStorage : safeLocalStorage(doc);
   const notice = $("lw-notice");
@@ -55,7 +59,8 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
     selected: null,
     openDraft: null,
     comparePair: null,
-    ...storeFunctions(),
+    editors: new Map(),
+    ...libraryFunctions(options.library),
     notice: (text, kind = "done") => {
       notice.textContent = text;
       notice.className = kind === "problem" ? "notice notice-problem" : "notice";
@@ -71,7 +76,7 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
       renderTabs();
       panel.setAttribute("aria-labelledby", `lw-tab-${view}`);
       panel.setAttribute("data-view", view);
-      panel.replaceChildren(VIEWS.find((v) => v.name === view)!.render(ctx));
+      panel.replaceChildren(viewNamed(view).render(ctx));
       doc.defaultView?.scrollTo({ top: scroll });
     },
   };
@@ -96,6 +101,12 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
     doc.getElementById(`lw-tab-${VIEWS[to].name}`)?.focus();
   });
   ctx.show("library");
+}
+
+function viewNamed(name: ViewName): (typeof VIEWS)[number] {
+  const view = VIEWS.find((v) => v.name === name);
+  if (!view) throw new Error(`no view ${name}`);
+  return view;
 }
 
 function safeLocalStorage(doc: Document): Storage | null {

@@ -8,10 +8,10 @@
  */
 import { compareRulesets, shippedRulesets, type RulesetFile } from "../core/index.js";
 import { button, el } from "./dom.js";
-import { checkDraft, EMPTY_APPROVAL, type ApprovalBlock } from "./draftCheck.js";
-import { draftId } from "./editorView.js";
+import { checkDraft } from "./draftCheck.js";
+import { draftId } from "./draftLabel.js";
 import { downloadRuleset, exportFileName } from "./exportRuleset.js";
-import { draftOfImport, rulesetText } from "./openDraft.js";
+import { approvalIn, draftOfImport, rulesetText } from "./openDraft.js";
 import type { PaneContext } from "./paneContext.js";
 import { approvalBadge, sourceLine, unverifiedSuffix, verificationBadge } from "./statusText.js";
 
@@ -19,19 +19,10 @@ export function transferView(ctx: PaneContext): HTMLElement {
   return el(ctx.doc, "div", { id: "lw-transfer" }, importSection(ctx), exportSection(ctx));
 }
 
-function approvalIn(text: string): ApprovalBlock {
-  try {
-    const a = (JSON.parse(text) as { approval?: unknown } | null)?.approval;
-    return a && typeof a === "object" ? (a as ApprovalBlock) : EMPTY_APPROVAL;
-  } catch {
-    return EMPTY_APPROVAL;
-  }
-}
-
 function importSection(ctx: PaneContext): HTMLElement {
   const { doc } = ctx;
-  const file = el(doc, "input", { id: "lw-import-file", type: "file", accept: ".json,application/json" }) as HTMLInputElement;
-  const text = el(doc, "textarea", { id: "lw-import-text", class: "mono", rows: "8", spellcheck: "false", wrap: "off" }) as HTMLTextAreaElement;
+  const file = el(doc, "input", { id: "lw-import-file", type: "file", accept: ".json,application/json" });
+  const text = el(doc, "textarea", { id: "lw-import-text", class: "mono", rows: "8", spellcheck: "false", wrap: "off" });
   const result = el(doc, "div", { id: "lw-import-result", "aria-live": "polite" });
   let source = "pasted text";
   const check = () => result.replaceChildren(...importResult(ctx, text.value, source));
@@ -126,7 +117,7 @@ function importResult(ctx: PaneContext, text: string, source: string): HTMLEleme
   }, { id: "lw-import-store", class: "primary" });
   let confirm: HTMLInputElement | null = null;
   if (warnings.length > 0) {
-    confirm = el(doc, "input", { type: "checkbox", id: "lw-import-confirm" }) as HTMLInputElement;
+    confirm = el(doc, "input", { type: "checkbox", id: "lw-import-confirm" });
     storeButton.disabled = true;
     confirm.addEventListener("change", () => {
       storeButton.disabled = !confirm?.checked;
@@ -153,10 +144,10 @@ function exportSection(ctx: PaneContext): HTMLElement {
     files.set(`draft:${d.key}`, checked.ruleset.file);
     options.push(el(doc, "option", { value: `draft:${d.key}` }, `draft ${draftId(d)} (not stored)${unverifiedSuffix(checked.status)}`));
   }
-  const pick = el(doc, "select", { id: "lw-export-pick" }, ...options) as HTMLSelectElement;
+  const pick = el(doc, "select", { id: "lw-export-pick" }, ...options);
   const selectedKey = [...files.keys()].find((k) => k.endsWith(`:${ctx.selected ?? ""}`) && !k.startsWith("draft:"));
   if (selectedKey) pick.value = selectedKey;
-  const shown = el(doc, "textarea", { id: "lw-export-text", class: "mono", rows: "10", readonly: "", wrap: "off", "aria-label": "The ruleset as JSON text, to copy" }) as HTMLTextAreaElement;
+  const shown = el(doc, "textarea", { id: "lw-export-text", class: "mono", rows: "10", readonly: "", wrap: "off", "aria-label": "The ruleset as JSON text, to copy" });
   shown.hidden = true;
   const current = () => files.get(pick.value);
   pick.addEventListener("change", () => {

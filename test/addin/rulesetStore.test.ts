@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
-import { RulesetStore, STORE_FORMAT, STORE_KEY } from "../../src/addin/rulesetStore.js";
-import { memoryBackend, type SettingsBackend } from "../../src/addin/settingsBackend.js";
+import { RulesetStore, STORE_FORMAT, STORE_KEY } from "../../src/workbook/rulesetStore.js";
+import { memoryBackend, type SettingsBackend } from "../../src/workbook/settingsBackend.js";
 import { SEISMIC_FIXTURE, STRENGTH_FIXTURE } from "../functions/fixtures.js";
 
 /** A backend whose writes fail, as a workbook that cannot save its settings. */

@@ -33,7 +33,7 @@ describe("loadwrightCalls", () => {
 
   test("knows the ruleset argument of every formula declared in src/functions/functions.ts", () => {
     const source = readFileSync(join(ROOT, "src/functions/functions.ts"), "utf8");
-    const declared = [...source.matchAll(/@customfunction (\w+)[\s\S]*?\nfunction \w+\(([^)]*)\)/g)].map(([, id, params]) => [
+    const declared = [...source.matchAll(/@customfunction (\w+)[\s\S]*?\n(?:export )?function \w+\(([^)]*)\)/g)].map(([, id, params]) => [
       `LW.${id}`,
       params.split(",").map((p) => p.trim().split(/[?:]/)[0]).indexOf("ruleset"),
     ]);

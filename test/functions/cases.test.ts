@@ -1,8 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { ENVELOPE } from "../../src/functions/formulas/envelopeFormula.js";
-import { evaluateFormula } from "../../src/functions/runFormula.js";
 import { STRENGTH_ROWS } from "./fixtures.js";
-import { message } from "./outcome.js";
+import { evaluateFormula, message } from "./outcome.js";
 
 /** The case table sits at Loads!B3:D6 and the ruleset at Loads!G3:I8. */
 const AT = ["Loads!B3:D6", "Loads!G3:I8"];

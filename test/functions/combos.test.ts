@@ -1,20 +1,17 @@
-import { afterEach, beforeEach, describe, expect, test } from "vitest";
-import { rulesetStore, useRulesetStore } from "../../src/addin/rulesetLibrary.js";
-import { RulesetStore } from "../../src/addin/rulesetStore.js";
-import { memoryBackend } from "../../src/addin/settingsBackend.js";
+import { beforeEach, describe, expect, test } from "vitest";
 import { COMBOS } from "../../src/functions/formulas/combosFormula.js";
-import { evaluateFormula } from "../../src/functions/runFormula.js";
 import type { OutputCell } from "../../src/functions/formula.js";
 import { SEISMIC_FIXTURE } from "./fixtures.js";
-import { body, expectExcelShaped, message, value } from "./outcome.js";
+import { body, expectExcelShaped, message, testWorkbook, type TestWorkbook, value } from "./outcome.js";
 
-let previous: RulesetStore;
+let workbook: TestWorkbook = testWorkbook();
+/** The formulas and the store of this test's own workbook. */
+const evaluateFormula: TestWorkbook["evaluateFormula"] = (...a) => workbook.evaluateFormula(...a);
+const rulesetStore = () => workbook.store;
 beforeEach(async () => {
-  previous = rulesetStore();
-  useRulesetStore(new RulesetStore(memoryBackend()));
+  workbook = testWorkbook();
   expect((await rulesetStore().save(SEISMIC_FIXTURE)).ok).toBe(true);
 });
-afterEach(() => useRulesetStore(previous));
 
 /** Factor on a column, by header, in the row with this label. */
 function factor(table: OutputCell[][], label: string, column: string): OutputCell {

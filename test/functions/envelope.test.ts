@@ -1,23 +1,19 @@
-import { afterEach, beforeEach, describe, expect, test } from "vitest";
-import { rulesetStore, useRulesetStore } from "../../src/addin/rulesetLibrary.js";
-import { RulesetStore } from "../../src/addin/rulesetStore.js";
-import { memoryBackend } from "../../src/addin/settingsBackend.js";
+import { beforeEach, describe, expect, test } from "vitest";
 import { ENVELOPE } from "../../src/functions/formulas/envelopeFormula.js";
-import { evaluateFormula } from "../../src/functions/runFormula.js";
 import { COLUMN_TABLE, SEISMIC_FIXTURE, STRENGTH_FIXTURE, STRENGTH_ROWS } from "./fixtures.js";
-import { body, expectExcelShaped, message, rowOf, value } from "./outcome.js";
+import { body, expectExcelShaped, message, rowOf, testWorkbook, type TestWorkbook, value } from "./outcome.js";
 
 const transpose = <T>(m: T[][]): T[][] => m[0].map((_, c) => m.map((r) => r[c]));
 
-let previous: RulesetStore;
+let workbook: TestWorkbook = testWorkbook();
+/** The formulas and the store of this test's own workbook. */
+const evaluateFormula: TestWorkbook["evaluateFormula"] = (...a) => workbook.evaluateFormula(...a);
 beforeEach(async () => {
-  previous = rulesetStore();
-  const store = new RulesetStore(memoryBackend());
-  useRulesetStore(store);
+  workbook = testWorkbook();
+  const store = workbook.store;
   expect((await store.save(STRENGTH_FIXTURE)).ok).toBe(true);
   expect((await store.save(SEISMIC_FIXTURE)).ok).toBe(true);
 });
-afterEach(() => useRulesetStore(previous));
 
 describe("LW.ENVELOPE", () => {
   test("gives the max and min of every component with the row that gives each", () => {

@@ -1,8 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { EXPLAIN } from "../../src/functions/formulas/explainFormula.js";
-import { evaluateFormula } from "../../src/functions/runFormula.js";
 import { COLUMN_TABLE, STRENGTH_ROWS } from "./fixtures.js";
-import { message, value } from "./outcome.js";
+import { evaluateFormula, message, value } from "./outcome.js";
 
 describe("LW.EXPLAIN", () => {
   test("writes out 1.2 × 140 + 1.6 × 420 = 168 + 672 = 840 for the column under 1.2D + 1.6L", () => {

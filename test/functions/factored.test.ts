@@ -1,8 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { FACTORED } from "../../src/functions/formulas/factoredFormula.js";
-import { evaluateFormula } from "../../src/functions/runFormula.js";
 import { COLUMN_TABLE, STRENGTH_ROWS } from "./fixtures.js";
-import { body, expectExcelShaped, message, rowOf, value } from "./outcome.js";
+import { body, evaluateFormula, expectExcelShaped, message, rowOf, value } from "./outcome.js";
 
 const P_ONLY = [["", "P"], ["D", 140], ["L", 420]];
 

@@ -5,10 +5,10 @@
  * to compute that a reader can check by hand.
  */
 import type { Cell, RulesetFile } from "../../src/core/index.js";
+import { rulesetFile } from "../support/rulesetFile.js";
 
 /** ASCE/SEI 7-16 §2.3.1 strength combinations (1)–(5) [confirmed for the 7-10 list, which 7-16 keeps; numbering memory]. */
-export const STRENGTH_FIXTURE: RulesetFile = {
-  format: "loadwright-ruleset/1",
+export const STRENGTH_FIXTURE: RulesetFile = rulesetFile({
   id: "test-strength",
   title: "Test fixture: strength combinations after ASCE/SEI 7-16 §2.3.1 (not a shipped ruleset)",
   standard: { name: "ASCE/SEI 7", edition: "2016", clauses: "§2.3.1" },
@@ -30,16 +30,14 @@ export const STRENGTH_FIXTURE: RulesetFile = {
     { id: "5", expression: "0.9D + 1.0W!", clause: "§2.3.1 (5)" },
   ],
   provenance: [{ source: "ASCE/SEI 7-16 §2.3.1 (list confirmed for the 7-10 text, which 7-16 keeps)", status: "confirmed", covers: "combinations 1 to 5" }],
-  approval: { approvedBy: null, date: null, fingerprint: null },
-};
+});
 
 /**
  * ASCE/SEI 7-16 §2.3.6 seismic combinations (6) and (7) with Ev = 0.2·SDS·D
  * [confirmed] and Eh = ρ·QE [memory]; ρ is 1.0 or 1.3 (§12.3.4) [memory].
  * From memory in part, so it must show as UNVERIFIED.
  */
-export const SEISMIC_FIXTURE: RulesetFile = {
-  format: "loadwright-ruleset/1",
+export const SEISMIC_FIXTURE: RulesetFile = rulesetFile({
   id: "test-seismic",
   title: "Test fixture: seismic combinations after ASCE/SEI 7-16 §2.3.6 (not a shipped ruleset)",
   standard: { name: "ASCE/SEI 7", edition: "2016", clauses: "§2.3.6" },
@@ -62,8 +60,7 @@ export const SEISMIC_FIXTURE: RulesetFile = {
     { source: "ASCE/SEI 7-16 §2.3.6", status: "from-memory", covers: "numbering, Eh = rho*QE, the allowed values of rho" },
     { source: "a practitioner document citing ASCE/SEI 7-16", status: "confirmed", covers: "Ev = 0.2*SDS*D" },
   ],
-  approval: { approvedBy: null, date: null, fingerprint: null },
-};
+});
 
 /** The same strength list typed in cells, as a user would: [id, expression, clause]. */
 export const STRENGTH_ROWS: Cell[][] = [

@@ -1,8 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { GOVERNING } from "../../src/functions/formulas/governingFormula.js";
-import { evaluateFormula } from "../../src/functions/runFormula.js";
 import { COLUMN_TABLE, STRENGTH_ROWS } from "./fixtures.js";
-import { body, expectExcelShaped, message, value } from "./outcome.js";
+import { body, evaluateFormula, expectExcelShaped, message, value } from "./outcome.js";
 
 // Hand values for COLUMN_TABLE (D: P 140, V 2; L: P 420, V 5; W: P −50, V 10) under
 // ASCE/SEI 7-16 §2.3.1 (1)–(5) [confirmed for the 7-10 list]; V and W values invented for the test.

@@ -1,14 +1,12 @@
 import { createHash } from "node:crypto";
 import canonicalize from "canonicalize";
-import { afterEach, beforeEach, describe, expect, test } from "vitest";
-import { rulesetStore, useRulesetStore } from "../../src/addin/rulesetLibrary.js";
-import { RulesetStore, STORE_FORMAT, STORE_KEY } from "../../src/addin/rulesetStore.js";
-import { memoryBackend } from "../../src/addin/settingsBackend.js";
+import { beforeEach, describe, expect, test } from "vitest";
+import { RulesetStore, STORE_FORMAT, STORE_KEY } from "../../src/workbook/rulesetStore.js";
+import { memoryBackend } from "../../src/workbook/settingsBackend.js";
 import { shippedRulesets, type RulesetFile } from "../../src/core/index.js";
 import { RULESET } from "../../src/functions/formulas/rulesetFormula.js";
-import { evaluateFormula } from "../../src/functions/runFormula.js";
 import { SEISMIC_FIXTURE, STRENGTH_FIXTURE, STRENGTH_ROWS } from "./fixtures.js";
-import { message, rowOf, value } from "./outcome.js";
+import { message, rowOf, testWorkbook, type TestWorkbook, value } from "./outcome.js";
 
 /**
  * The fingerprint as docs/rulesets.md, "Rulesets" defines it, computed here with Node's own
@@ -19,12 +17,15 @@ function referenceFingerprint(file: RulesetFile): string {
   return createHash("sha256").update(canonicalize(content) ?? "", "utf8").digest("hex");
 }
 
-let previous: RulesetStore;
+let workbook: TestWorkbook = testWorkbook();
+/** The formulas and the store of this test's own workbook. */
+const evaluateFormula: TestWorkbook["evaluateFormula"] = (...a) => workbook.evaluateFormula(...a);
+const rulesetStore = () => workbook.store;
+/** Opens the workbook over another store (one holding what a test wrote there). */
+const useRulesetStore = (store: RulesetStore) => (workbook = testWorkbook(store));
 beforeEach(() => {
-  previous = rulesetStore();
-  useRulesetStore(new RulesetStore(memoryBackend()));
+  workbook = testWorkbook();
 });
-afterEach(() => useRulesetStore(previous));
 
 const field = (table: ReturnType<typeof value>, name: string) => rowOf(table, name)[1];
 

@@ -1,8 +1,8 @@
 import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 import type { Formula } from "../../src/functions/formula.js";
 import { FACTORED } from "../../src/functions/formulas/factoredFormula.js";
-import { evaluateFormula, runFormula } from "../../src/functions/runFormula.js";
 import { STRENGTH_ROWS } from "./fixtures.js";
+import { evaluateFormula, runFormula } from "./outcome.js";
 
 /** A stand-in for Excel's CustomFunctions global (the Office mock package does not cover it). */
 class StandInError {

@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { findShippedRuleset, loadRuleset, rulesetStatus, type Ruleset } from "../../src/core/index.js";
-import type { Library, LibraryEntry } from "../../src/addin/rulesetLibrary.js";
+import type { Library, LibraryEntry } from "../../src/workbook/rulesetLibrary.js";
 import { DEMO_RULESET } from "../../src/addin/demoRuleset.js";
 import { checkDraft } from "../../src/taskpane/draftCheck.js";
 import { draftOfCopy, draftOfNew, draftOfStored, newIdProblem } from "../../src/taskpane/openDraft.js";

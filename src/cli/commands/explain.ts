@@ -4,8 +4,7 @@
  * on every case and where it comes from, the products and their sum. In a
  * streamed file only the named result row is kept.
  */
-import { describeProblem, explain, type CaseTable } from "../../core/index.js";
-import { distance } from "fastest-levenshtein";
+import { describeProblem, didYouMean, explain, NearestName, type CaseTable } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { jsonNumber, numberText } from "../output/cells.js";
 import { jsonHeader } from "../output/preamble.js";
@@ -27,16 +26,15 @@ export async function explainCommand(file: string, options: ExplainOptions, io: 
     table = input.table;
   } else {
     let values: Float64Array | null = null;
-    let guess: { id: string; d: number } | null = null;
+    const guess = new NearestName(wanted);
     for await (const row of input.rows) {
       if (row.id === wanted) {
         values = row.values;
         break; // leaving the loop closes the file
       }
-      const d = distance(wanted.toLowerCase(), row.id.toLowerCase());
-      if (d <= 2 && (!guess || d < guess.d)) guess = { id: row.id, d };
+      guess.consider(row.id);
     }
-    if (!values) throw new CliError(`--component: no result row of ${file} is named "${wanted}"${guess ? `; did you mean "${guess.id}"?` : ""}`);
+    if (!values) throw new CliError(`--component: no result row of ${file} is named "${wanted}"${didYouMean(guess.best)}`);
     table = { orientation: "columns", cases: input.cases, components: [wanted], values: [values], map: input.map };
   }
   const row = /^\d+$/.test(options.row.trim()) ? Number(options.row.trim()) : options.row;

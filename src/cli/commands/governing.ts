@@ -9,8 +9,7 @@
  * small table); further passes write every result's value in each governing
  * row. Memory stays flat in the number of result rows, whatever the criteria.
  */
-import { governing, parseCriterion, rowValue, defaultCriteria, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
-import { distance } from "fastest-levenshtein";
+import { governing, parseCriterion, rowValue, defaultCriteria, didYouMean, NearestName, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { openCases, type CaseStream } from "../input/caseInput.js";
 import { jsonNumber, numberText } from "../output/cells.js";
@@ -108,26 +107,20 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
   // Pass 1: keep the result rows the criteria name; note the closest id to each name that is missing.
   const wanted = new Set(options.criterion.flatMap(namesIn));
   const found = new Map<string, Float64Array>();
-  const closest = new Map<string, { id: string; d: number }>();
+  const closest = new Map([...wanted].map((name) => [name, new NearestName(name)]));
   for await (const r of resultsOf(first, "governing (choosing rows)")) {
     if (wanted.has(r.id)) {
       if (!found.has(r.id)) found.set(r.id, Float64Array.from(r.values));
       continue;
     }
-    for (const name of wanted) {
-      if (found.has(name)) continue;
-      const d = distance(name.toLowerCase(), r.id.toLowerCase());
-      const best = closest.get(name);
-      if (d <= 2 && (!best || d < best.d)) closest.set(name, { id: r.id, d });
-    }
+    for (const name of wanted) if (!found.has(name)) closest.get(name)?.consider(r.id);
   }
   const missing = [...wanted].filter((n) => !found.has(n) && !/^abs$/i.test(n));
   if (missing.length > 0) {
     throw cliErrorOf(
       missing.map((name) => {
         const text = options.criterion.find((t) => namesIn(t).includes(name)) ?? "";
-        const guess = closest.get(name);
-        return `--criterion "${text}": no result row of ${file} is named "${name}"${guess ? `; did you mean "${guess.id}"?` : ""} (${idColumnsText(idColumnsOf(options.idColumns))}; write names with spaces in [brackets])`;
+        return `--criterion "${text}": no result row of ${file} is named "${name}"${didYouMean(closest.get(name)?.best)} (${idColumnsText(idColumnsOf(options.idColumns))}; write names with spaces in [brackets])`;
       }),
     );
   }

@@ -22,7 +22,7 @@ export async function sheetWorkbook(sheet: ReviewerSheet): Promise<Uint8Array> {
   const ws = book.addWorksheet(sheet.name);
   for (const cell of sheet.cells) {
     const target = ws.getCell(cell.address);
-    if (cell.kind === "formula") target.value = { formula: cell.formula } as ExcelJS.CellFormulaValue;
+    if (cell.kind === "formula") target.value = { formula: cell.formula };
     else target.value = cell.value;
     if (cell.style) target.font = FONTS[cell.style];
   }

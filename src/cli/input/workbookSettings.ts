@@ -23,8 +23,7 @@
  * value is read as JSON and, where that gives a string, its text is read as
  * the store; a value that is the store object itself is read too.
  */
-import { describeProblem, jsonSyntaxError, loadRuleset, type Problem, type Result, type Ruleset } from "../../core/index.js";
-import { STORE_FORMAT, STORE_KEY } from "../../addin/rulesetStore.js";
+import { describeProblem, jsonSyntaxError, loadRuleset, STORE_FORMAT, STORE_KEY, type Problem, type Result, type Ruleset } from "../../core/index.js";
 import type { WorkbookPackage } from "./workbookPackage.js";
 import { attributeOf, type XmlElement } from "./xmlPart.js";
 

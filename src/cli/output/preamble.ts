@@ -1,29 +1,21 @@
 /**
  * What every output says before its numbers: which ruleset (id, version,
  * fingerprint), whether it is verified (UNVERIFIED up front), the parameters
- * in force, and the cautions. People's formats print it on standard output;
+ * in force, what the case table leaves out, and the cautions — in the
+ * catalogue's words (core/text). People's formats print it on standard output;
  * csv and json print it on standard error, so standard output stays parseable.
  */
-import type { Plan, RulesetStatus } from "../../core/index.js";
+import { omissionTexts, planOmissions, shortCautions, statusText, type Plan, type RulesetStatus } from "../../core/index.js";
 import type { ChosenRuleset } from "../input/rulesetOption.js";
 import { jsonNumber, numberText } from "./cells.js";
 import type { Format } from "./format.js";
 
-export const CAUTIONS: readonly string[] = [
-  "Results must be reviewed by a qualified, licensed engineer before they are used in a design.",
-  "The adopted code edition and its local amendments govern; a ruleset does not replace them.",
-  "Shipped rulesets must be verified against the standard before use; an UNVERIFIED ruleset's factors are from memory.",
-];
+/** The cautions in their short form, one a line (the JSON outputs carry the same). */
+export const CAUTIONS: readonly string[] = shortCautions();
 
+/** The verification word a stamp starts with: UNVERIFIED, NOT CHECKED, Checked. */
 export function statusWord(status: RulesetStatus): string {
-  switch (status.verification) {
-    case "checked":
-      return "checked";
-    case "unverified":
-      return "UNVERIFIED";
-    case "user":
-      return "user";
-  }
+  return statusText(status, { approvedBy: null, date: null }).word;
 }
 
 export interface ParameterInForce {
@@ -44,22 +36,18 @@ export function parametersInForce(plan: Plan): ParameterInForce[] {
 export function identityLines(chosen: ChosenRuleset, plan: Plan | null): string[] {
   const { file } = chosen.ruleset;
   const standard = `${file.standard.name} ${file.standard.edition}${file.standard.clauses ? ` ${file.standard.clauses}` : ""}`;
+  const words = statusText(chosen.status, file.approval);
   const lines = [
+    ...(words.banner ? [words.banner] : []),
     `Ruleset: ${file.id} ${file.version} (${chosen.source === "shipped" ? "shipped" : `file ${chosen.source}`}), "${file.title}", ${standard}, fingerprint ${chosen.status.shortFingerprint}`,
-    `Status: ${chosen.status.summary}`,
+    `Status: ${words.summary}`,
   ];
-  if (chosen.status.verification === "unverified") {
-    lines.unshift("*** UNVERIFIED RULESET: its factors are from memory and have not been checked against the standard ***");
-  }
   if (plan) {
     const params = parametersInForce(plan);
     if (params.length > 0) {
       lines.push(`Parameters: ${params.map((p) => `${p.name} = ${typeof p.value === "number" ? numberText(p.value) : p.value} (${p.given ? "given" : "default"})`).join(", ")}`);
     }
-    const skipped = plan.combinations.filter((c) => c.skipped !== null).map((c) => `${c.combination.id} (${c.skipped})`);
-    if (skipped.length > 0) lines.push(`Skipped combinations: ${skipped.join("; ")}`);
-    const missing = [...new Set(plan.combinations.filter((c) => c.skipped === null).flatMap((c) => c.notSupplied))];
-    if (missing.length > 0) lines.push(`Not in the case table (taken as zero): ${missing.join(", ")}`);
+    for (const note of omissionTexts(planOmissions(plan))) lines.push(`Note: ${note}`);
   }
   return lines;
 }
@@ -95,7 +83,7 @@ export function parametersJson(plan: Plan) {
 
 /** What opens every JSON output of a command on a case table: the ruleset, the parameters in force, the cautions. */
 export function jsonHeader(chosen: ChosenRuleset, plan: Plan) {
-  return { ruleset: rulesetJson(chosen), parameters: parametersJson(plan), cautions: CAUTIONS };
+  return { ruleset: rulesetJson(chosen), parameters: parametersJson(plan), cautions: [...CAUTIONS] };
 }
 
 /** The same header opening a streamed JSON document, up to the named list that follows: `{"ruleset":…,"rows":[`. */

@@ -6,6 +6,7 @@
 import { cellText, isBlank, type Cell } from "../cells.js";
 import { fail, ok, problem, type Problem, type Result } from "../problems.js";
 import { type CaseMode, type Ruleset, rulesetName } from "../ruleset/model.js";
+import { caseModeSchema } from "../ruleset/schema.js";
 import { nearest } from "../text/nearest.js";
 
 export interface LoadCase {
@@ -25,7 +26,7 @@ export interface CaseMap {
 
 export const EMPTY_CASE_MAP: CaseMap = { symbolOf: new Map(), modes: new Map(), reversible: new Map() };
 
-const MODES: readonly CaseMode[] = ["sum", "each", "orthogonal", "independent"];
+const MODES: readonly CaseMode[] = caseModeSchema.options;
 const DIRECTIONS = ["one-way", "both-ways"];
 
 /** The symbol a header names, or a problem naming the header and the symbols there are. */

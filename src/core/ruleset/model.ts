@@ -1,8 +1,8 @@
 /** The validated, parsed form of a ruleset that the planner works from. */
 import type { Sum } from "../expression/ast.js";
-import type { RulesetFile } from "./schema.js";
+import type { CaseMode, RulesetFile } from "./schema.js";
 
-export type CaseMode = "sum" | "each" | "orthogonal" | "independent";
+export type { CaseMode } from "./schema.js";
 
 export interface LoadSymbol {
   name: string;

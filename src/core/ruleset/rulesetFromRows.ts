@@ -31,7 +31,7 @@ export function rulesetFromRows(rows: Cell[][]): Result<Ruleset> {
   const expressionColumn = width === 1 ? 0 : 1;
   rows.forEach((row, r) => {
     if (row.every(isBlank)) return;
-    const cells = [...row, ...Array(width - row.length).fill(null)] as Cell[];
+    const cells: Cell[] = [...row, ...new Array<Cell>(width - row.length).fill(null)];
     if (r === 0 && cells.every((c, i) => cellText(c).toLowerCase() === HEADER_WORDS[width === 1 ? 1 : i])) return;
     const id = width === 1 ? String(combinations.length + 1) : cellText(cells[0]);
     const expression = cellText(cells[expressionColumn]);

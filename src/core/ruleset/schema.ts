@@ -16,20 +16,38 @@ export const RULESET_ID_PATTERN = /^[a-z0-9][a-z0-9._-]*$/;
 const name = z.string().regex(NAME_PATTERN, "must start with a letter and hold only letters, digits and _");
 const text = z.string().trim().min(1, "must not be empty");
 
+export const permanenceSchema = z.enum(["permanent", "transient"]);
+export type Permanence = z.infer<typeof permanenceSchema>;
+
+/**
+ * How several cases of one load symbol in a table combine: "sum" (all act
+ * together), "each" (one at a time, in turn), "orthogonal" (each direction
+ * leading at full value with the others at `orthogonalShare`, all signs),
+ * "independent" (all act, each taking its term's factor options on its own:
+ * permanent actions from different sources).
+ */
+export const caseModeSchema = z.enum(["sum", "each", "orthogonal", "independent"]);
+export type CaseMode = z.infer<typeof caseModeSchema>;
+
+/** ASCE/SEI 7-16 §12.5.3: 100 % in one direction plus 30 % in the perpendicular one [confirmed for the 7-10 text]. */
+export const DEFAULT_ORTHOGONAL_SHARE = 0.3;
+
+/** What a symbol's unwritten optional fields mean, by its permanence (docs/rulesets.md, "Rulesets"). */
+export const SYMBOL_DEFAULTS: Readonly<Record<Permanence, { reversible: boolean; cases: CaseMode; canBeAbsent: boolean }>> = {
+  permanent: { reversible: false, cases: "sum", canBeAbsent: false },
+  transient: { reversible: false, cases: "each", canBeAbsent: true },
+};
+
+export const provenanceStatusSchema = z.enum(["confirmed", "from-memory"]);
+
 export const symbolSchema = z.strictObject({
   description: text,
-  permanence: z.enum(["permanent", "transient"]),
+  permanence: permanenceSchema,
   /** Acts in both directions: every case of the symbol is taken with + and − sign. */
   reversible: z.boolean().optional(),
-  /**
-   * How several cases of this symbol in one table combine: "sum" (all act
-   * together), "each" (one at a time, in turn), "orthogonal" (each direction
-   * leading at full value with the others at `orthogonalShare`, all signs),
-   * "independent" (all act, each taking its term's factor options on its own:
-   * permanent actions from different sources).
-   */
-  cases: z.enum(["sum", "each", "orthogonal", "independent"]).optional(),
-  /** The share of the non-leading directions under "orthogonal": a number or a value name. */
+  /** How several cases of this symbol in one table combine; unwritten: SYMBOL_DEFAULTS by permanence. */
+  cases: caseModeSchema.optional(),
+  /** The share of the non-leading directions under "orthogonal": a number or a value name; unwritten: DEFAULT_ORTHOGONAL_SHARE. */
   orthogonalShare: z.union([z.number(), name]).optional(),
   /** May a term of this symbol be left out where that is worse? Default: transient yes, permanent no. */
   canBeAbsent: z.boolean().optional(),
@@ -76,7 +94,7 @@ export const provenanceSchema = z.strictObject({
    */
   locator: text.optional(),
   /** "confirmed": checked against the source; "from-memory": recalled, to be verified. */
-  status: z.enum(["confirmed", "from-memory"]),
+  status: provenanceStatusSchema,
   /** Which parts of the ruleset this source covers, in words. */
   covers: text,
   /** The ids of the combinations this source vouches for (or, if from memory, leaves open). */
@@ -109,9 +127,9 @@ export const rulesetSchema = z.strictObject({
   approval: approvalSchema,
 });
 
+/** The kinds of parameter ("number", "choice"), read off the schema's discriminated union. */
+export const PARAMETER_TYPES: readonly string[] = parameterSchema.options.map((o) => o.shape.type.value);
+
 export type RulesetFile = z.infer<typeof rulesetSchema>;
 export type SymbolFile = z.infer<typeof symbolSchema>;
-export type ParameterFile = z.infer<typeof parameterSchema>;
-export type CombinationFile = z.infer<typeof combinationSchema>;
-export type ApprovalFile = z.infer<typeof approvalSchema>;
 export type ProvenanceFile = z.infer<typeof provenanceSchema>;

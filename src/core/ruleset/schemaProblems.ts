@@ -5,6 +5,7 @@
 import type { z } from "zod";
 import { problem, type Problem } from "../problems.js";
 import { nearest } from "../text/nearest.js";
+import { allowedKeys } from "./schemaWalk.js";
 
 type Issue = z.core.$ZodIssue;
 type Path = (string | number)[];
@@ -84,45 +85,4 @@ function valueAt(input: unknown, path: Path): unknown {
     v = (v as Record<string | number, unknown>)[key];
   }
   return v;
-}
-
-/** The field names a strict object at `path` allows, found by walking the schema alongside the input. */
-function allowedKeys(schema: z.ZodType, input: unknown, path: Path): string[] | undefined {
-  let node: z.ZodType | undefined = schema;
-  let value: unknown = input;
-  for (const key of [...path, null]) {
-    node = unwrap(node, value);
-    if (!node) return undefined;
-    if (key === null) break;
-    const def = node._zod.def as unknown as Record<string, unknown>;
-    if (def.type === "object") node = (def.shape as Record<string, z.ZodType>)[String(key)];
-    else if (def.type === "record") node = def.valueType as z.ZodType;
-    else if (def.type === "array") node = def.element as z.ZodType;
-    else return undefined;
-    value = value !== null && typeof value === "object" ? (value as Record<string | number, unknown>)[key] : undefined;
-  }
-  const def = node?._zod.def as unknown as Record<string, unknown> | undefined;
-  return def?.type === "object" ? Object.keys(def.shape as object) : undefined;
-}
-
-function unwrap(node: z.ZodType | undefined, value: unknown): z.ZodType | undefined {
-  for (let guard = 0; node && guard < 8; guard++) {
-    const def = node._zod.def as unknown as Record<string, unknown>;
-    if (def.type === "optional" || def.type === "nullable") {
-      node = def.innerType as z.ZodType;
-    } else if (def.type === "union") {
-      const options = def.options as z.ZodType[];
-      const discriminator = def.discriminator as string | undefined;
-      const tag = discriminator && value && typeof value === "object" ? (value as Record<string, unknown>)[discriminator] : undefined;
-      node = options.find((o) => {
-        const shape = (o._zod.def as unknown as { shape?: Record<string, z.ZodType> }).shape;
-        const literal = shape && discriminator ? (shape[discriminator]?._zod.def as unknown as { values?: unknown[] }) : undefined;
-        return literal?.values?.includes(tag);
-      });
-      if (!node) return undefined;
-    } else {
-      return node;
-    }
-  }
-  return node;
 }

@@ -3,6 +3,8 @@
  * factors were checked against the published source, and whether a firm has
  * approved this exact content.
  */
+import { fromMemoryTexts } from "../text/coverage.js";
+import { statusText } from "../text/statusText.js";
 import { fingerprintOf, shortFingerprint } from "./fingerprint.js";
 import type { Ruleset } from "./model.js";
 
@@ -14,9 +16,9 @@ export interface RulesetStatus {
   approval: Approval;
   fingerprint: string;
   shortFingerprint: string;
-  /** One line for a calculation stamp, a task pane badge or a CLI header. */
+  /** Verification and approval in one line (core/text/statusText.ts): a badge's title, a CLI status line. */
   summary: string;
-  /** The sources marked "from-memory", for the warning text. */
+  /** What each source marked "from-memory" covers, in words (core/text/coverage.ts). */
   fromMemory: string[];
   /** How many combinations a confirmed source vouches for and none leaves open from memory. */
   combinations: CombinationCoverage;
@@ -45,31 +47,19 @@ export function combinationCoverage(ruleset: Ruleset): CombinationCoverage {
   return { total: ids.length, confirmed: ids.length - unconfirmed.length, unconfirmed };
 }
 
-export const VERIFICATION_TEXT: Record<Verification, string> = {
-  checked: "factors checked against the sources named in its provenance",
-  unverified: "UNVERIFIED: some factors are from memory; verify against the standard before use",
-  user: "typed in the workbook: not checked by Loadwright",
-};
-
 export function rulesetStatus(ruleset: Ruleset): RulesetStatus {
   const fingerprint = fingerprintOf(ruleset.file);
-  const fromMemory = ruleset.file.provenance.filter((p) => p.status === "from-memory").map((p) => `${p.source} (${p.covers})`);
+  const fromMemory = fromMemoryTexts(ruleset.file);
   const verification: Verification = ruleset.origin === "cells" ? "user" : fromMemory.length > 0 ? "unverified" : "checked";
-  const { approvedBy, date, fingerprint: approvedPrint } = ruleset.file.approval;
+  const approvedPrint = ruleset.file.approval.fingerprint;
   let approval: Approval = "not-approved";
   if (approvedPrint) approval = approvedPrint === fingerprint ? "approved" : "changed-since-approval";
-  const approvalText =
-    approval === "approved"
-      ? `approved by ${approvedBy ?? "(no name)"} on ${date ?? "(no date)"}`
-      : approval === "changed-since-approval"
-        ? `CHANGED since its approval by ${approvedBy ?? "(no name)"} on ${date ?? "(no date)"}: the approval no longer applies`
-        : "not approved";
   return {
     verification,
     approval,
     fingerprint,
     shortFingerprint: shortFingerprint(fingerprint),
-    summary: `${VERIFICATION_TEXT[verification]}; ${approvalText}`,
+    summary: statusText({ verification, approval }, ruleset.file.approval).summary,
     fromMemory,
     combinations: combinationCoverage(ruleset),
   };

@@ -1,23 +1,61 @@
+/**
+ * The one "did you mean" policy: a known name is offered for a mistyped one
+ * only where it is the likely intent — the same letters in another case, or a
+ * few edits apart (none for names of one or two characters, where any other
+ * name is one edit away). Every surface words the suggestion with didYouMean.
+ */
 import { distance } from "fastest-levenshtein";
 
+/** Most edits between a typed name and the name offered for it, by the typed name's length. */
+export function suggestionLimit(length: number): number {
+  return length <= 2 ? 0 : length <= 4 ? 1 : 2;
+}
+
 /**
- * The known name closest to a mistyped one, if it is close enough to be the
- * likely intent: the same letters in another case, or a few edits apart (none
- * for names of one or two characters, where any other name is one edit away).
+ * The nearest known name, found one candidate at a time, so that a name can be
+ * looked for among the ids of a streamed file without keeping them.
  */
-export function nearest(typed: string, known: readonly string[]): string | undefined {
-  const lower = typed.toLowerCase();
-  const sameLetters = known.find((k) => k.toLowerCase() === lower);
-  if (sameLetters) return sameLetters;
-  const limit = typed.length <= 2 ? 0 : typed.length <= 4 ? 1 : 2;
-  let best: string | undefined;
-  let bestDistance = limit + 1;
-  for (const k of known) {
-    const d = distance(lower, k.toLowerCase());
-    if (d < bestDistance) {
-      best = k;
-      bestDistance = d;
+export class NearestName {
+  private readonly lower: string;
+  private readonly limit: number;
+  private sameLetters: string | undefined;
+  private closest: string | undefined;
+  private closestDistance: number;
+
+  constructor(readonly typed: string) {
+    this.lower = typed.toLowerCase();
+    this.limit = suggestionLimit(typed.length);
+    this.closestDistance = this.limit + 1;
+  }
+
+  consider(candidate: string): void {
+    const lower = candidate.toLowerCase();
+    if (lower === this.lower) {
+      this.sameLetters ??= candidate;
+      return;
+    }
+    if (this.sameLetters !== undefined) return;
+    const d = distance(this.lower, lower);
+    if (d < this.closestDistance) {
+      this.closest = candidate;
+      this.closestDistance = d;
     }
   }
-  return best;
+
+  /** The name to offer, if any is close enough. */
+  get best(): string | undefined {
+    return this.sameLetters ?? this.closest;
+  }
+}
+
+/** The known name closest to a mistyped one, if it is close enough to be the likely intent. */
+export function nearest(typed: string, known: Iterable<string>): string | undefined {
+  const finder = new NearestName(typed);
+  for (const k of known) finder.consider(k);
+  return finder.best;
+}
+
+/** `; did you mean "rho"?`, or nothing when there is no likely name. */
+export function didYouMean(guess: string | undefined): string {
+  return guess === undefined ? "" : `; did you mean "${guess}"?`;
 }

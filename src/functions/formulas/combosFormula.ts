@@ -5,9 +5,7 @@
  */
 import { comboRows, planCombinations, resolveParameters } from "../../core/index.js";
 import { given, type Formula } from "../formula.js";
-import { outputTable, planNotes } from "../outputTable.js";
-import { payloadProblem } from "../payloadGuard.js";
-import { failWith, labelBytes } from "./planning.js";
+import { labelBytes, tableResult } from "./planning.js";
 
 export const COMBOS: Formula = {
   name: "LW.COMBOS",
@@ -19,22 +17,17 @@ export const COMBOS: Formula = {
   evaluate(args) {
     const resolved = given(args.ruleset, "ruleset");
     const values = resolveParameters(resolved.ruleset, args.params.input);
-    if (!values.ok) return values;
-    const plan = planCombinations(resolved.ruleset, values.value, { cases: args.cases });
-    if (!plan.ok) return plan;
-    const tooBig = payloadProblem("LW.COMBOS", {
-      rows: plan.value.rowCount,
-      numberColumns: plan.value.cases.length,
-      textBytesPerRow: labelBytes(plan.value) + 24,
-    });
-    if (tooBig) return failWith(tooBig);
-    const rows = comboRows(plan.value);
-    if (!rows.ok) return rows;
-    return outputTable(
-      resolved,
-      ["combination row", "clause", ...plan.value.cases.map((c) => c.header)],
-      rows.value.map((r) => [r.label, r.clause, ...r.factors]),
-      planNotes(plan.value),
+    const plan = values.ok ? planCombinations(resolved.ruleset, values.value, { cases: args.cases }) : values;
+    return tableResult(
+      "LW.COMBOS",
+      args,
+      plan,
+      (p) => ({ rows: p.rowCount, numberColumns: p.cases.length, textBytesPerRow: labelBytes(p) + 24 }),
+      (p) => {
+        const rows = comboRows(p);
+        if (!rows.ok) return rows;
+        return { ok: true, value: { header: ["combination row", "clause", ...p.cases.map((c) => c.header)], body: rows.value.map((r) => [r.label, r.clause, ...r.factors]) } };
+      },
     );
   },
 };

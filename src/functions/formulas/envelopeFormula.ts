@@ -4,36 +4,21 @@
  * the row that gives it. Exact without listing the rows, so it has no row limit.
  */
 import { envelope } from "../../core/index.js";
-import { given, type Formula } from "../formula.js";
-import { outputTable, planNotes } from "../outputTable.js";
-import { payloadProblem } from "../payloadGuard.js";
-import { failWith, labelBytes, planOf } from "./planning.js";
+import { labelBytes, tableFormula } from "./planning.js";
 
-export const ENVELOPE: Formula = {
-  name: "LW.ENVELOPE",
-  parameters: [
-    { name: "cases", kind: "cases" },
-    { name: "ruleset", kind: "ruleset" },
-    { name: "params", kind: "params", optional: true },
-    { name: "options", kind: "options", optional: true },
-  ],
-  evaluate(args) {
-    const table = given(args.table, "cases");
-    const plan = planOf(args);
-    if (!plan.ok) return plan;
-    const tooBig = payloadProblem("LW.ENVELOPE", {
-      rows: table.components.length,
-      numberColumns: 2,
-      textBytesPerRow: 2 * labelBytes(plan.value) + 40,
-    });
-    if (tooBig) return failWith(tooBig);
-    const entries = envelope(plan.value, table);
+export const ENVELOPE = tableFormula(
+  "LW.ENVELOPE",
+  [],
+  (plan, table) => ({ rows: table.components.length, numberColumns: 2, textBytesPerRow: 2 * labelBytes(plan) + 40 }),
+  (plan, table) => {
+    const entries = envelope(plan, table);
     if (!entries.ok) return entries;
-    return outputTable(
-      given(args.ruleset, "ruleset"),
-      [table.orientation === "rows" ? "component" : "result", "max", "row giving max", "min", "row giving min"],
-      entries.value.map((e) => [e.result, e.max.value, e.max.label, e.min.value, e.min.label]),
-      planNotes(plan.value),
-    );
+    return {
+      ok: true,
+      value: {
+        header: [table.orientation === "rows" ? "component" : "result", "max", "row giving max", "min", "row giving min"],
+        body: entries.value.map((e) => [e.result, e.max.value, e.max.label, e.min.value, e.min.label]),
+      },
+    };
   },
-};
+);

@@ -4,32 +4,16 @@
  * in the order given; without criteria, the max and min of every component.
  */
 import { defaultCriteria, governing } from "../../core/index.js";
-import { given, type Formula, type OutputCell } from "../formula.js";
-import { outputTable, planNotes } from "../outputTable.js";
-import { payloadProblem } from "../payloadGuard.js";
-import { failWith, labelBytes, planOf } from "./planning.js";
+import type { OutputCell } from "../formula.js";
+import { labelBytes, tableFormula } from "./planning.js";
 
-export const GOVERNING: Formula = {
-  name: "LW.GOVERNING",
-  parameters: [
-    { name: "cases", kind: "cases" },
-    { name: "ruleset", kind: "ruleset" },
-    { name: "criteria", kind: "criteria", optional: true },
-    { name: "params", kind: "params", optional: true },
-    { name: "options", kind: "options", optional: true },
-  ],
-  evaluate(args) {
-    const table = given(args.table, "cases");
+export const GOVERNING = tableFormula(
+  "LW.GOVERNING",
+  [{ name: "criteria", kind: "criteria", optional: true }],
+  (plan, table, args) => ({ rows: (args.criteria ?? defaultCriteria(table)).length, numberColumns: table.components.length + 1, textBytesPerRow: labelBytes(plan) + 40 }),
+  (plan, table, args) => {
     const criteria = args.criteria ?? defaultCriteria(table);
-    const plan = planOf(args);
-    if (!plan.ok) return plan;
-    const tooBig = payloadProblem("LW.GOVERNING", {
-      rows: criteria.length,
-      numberColumns: table.components.length + 1,
-      textBytesPerRow: labelBytes(plan.value) + 40,
-    });
-    if (tooBig) return failWith(tooBig);
-    const rows = governing(plan.value, table, criteria);
+    const rows = governing(plan, table, criteria);
     if (!rows.ok) return rows;
     // The core lists a row that governs several criteria once; a checker reads one line per criterion.
     const lines: { order: number; cells: OutputCell[] }[] = [];
@@ -39,11 +23,6 @@ export const GOVERNING: Formula = {
       });
     }
     lines.sort((a, b) => a.order - b.order);
-    return outputTable(
-      given(args.ruleset, "ruleset"),
-      ["criterion", "value", "combination row", ...table.components],
-      lines.map((l) => l.cells),
-      planNotes(plan.value),
-    );
+    return { ok: true, value: { header: ["criterion", "value", "combination row", ...table.components], body: lines.map((l) => l.cells) } };
   },
-};
+);

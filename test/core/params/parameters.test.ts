@@ -1,9 +1,9 @@
 import { describe, expect, test } from "vitest";
-import { describeProblem, loadRuleset, parameterPairs, planCombinations, parseParameterText, resolveParameters, RULESET_FORMAT, type Result, type RulesetFile } from "../../../src/core/index.js";
+import { rulesetFile } from "../../support/rulesetFile.js";
+import { describeProblem, loadRuleset, parameterPairs, planCombinations, parseParameterText, resolveParameters, type Result, type RulesetFile } from "../../../src/core/index.js";
 
 /** Parameters as ASCE/SEI 7-16 and EN 1990 use them; values from shared/REFERENCES.md. */
-const file: RulesetFile = {
-  format: RULESET_FORMAT,
+const file: RulesetFile = rulesetFile({
   id: "params-test",
   title: "parameters test",
   standard: { name: "test", edition: "-" },
@@ -25,8 +25,7 @@ const file: RulesetFile = {
   },
   combinations: [{ id: "6", expression: "(1.2 + 0.2*SDS)D + rho*psi0*Q", clause: "test" }],
   provenance: [{ source: "test", status: "confirmed", covers: "all" }],
-  approval: { approvedBy: null, date: null, fingerprint: null },
-};
+});
 const loaded = loadRuleset(file);
 if (!loaded.ok) throw new Error(JSON.stringify(loaded.problems));
 const ruleset = loaded.value;

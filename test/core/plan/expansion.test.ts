@@ -3,6 +3,7 @@
  * worked out by hand from the codes' forms.
  */
 import { describe, expect, test } from "vitest";
+import { rulesetFile } from "../../support/rulesetFile.js";
 import {
   comboRows,
   describeProblem,
@@ -13,7 +14,6 @@ import {
   readCaseTable,
   rowLabel,
   rulesetFromRows,
-  RULESET_FORMAT,
   type Cell,
   type Plan,
   type Ruleset,
@@ -217,8 +217,7 @@ describe("expansion", () => {
 
 /** G, S, W with EN 1990 Table A1.1 ψ values for snow (altitude ≤ 1000 m) and wind [confirmed]. */
 function euroRuleset(expression: string): Ruleset {
-  const file: RulesetFile = {
-    format: RULESET_FORMAT,
+  const file: RulesetFile = rulesetFile({
     id: "en1990-test",
     title: "EN 1990 forms for tests",
     standard: { name: "EN 1990", edition: "2002" },
@@ -230,8 +229,8 @@ function euroRuleset(expression: string): Ruleset {
     },
     combinations: [{ id: "6.10", expression, clause: "EN 1990 (6.10)" }],
     provenance: [{ source: "EN 1990 Table A1.1, A1.2(B)", status: "confirmed", covers: "all" }],
-    approval: { approvedBy: null, date: null, fingerprint: null },
-  };
+  });
+
   const r = loadRuleset(file);
   if (!r.ok) throw new Error(JSON.stringify(r.problems));
   return r.value;

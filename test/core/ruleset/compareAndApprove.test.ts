@@ -1,10 +1,10 @@
 import { describe, expect, test } from "vitest";
-import { approveRuleset, compareRulesets, describeProblem, loadRuleset, rulesetStatus, RULESET_FORMAT, withoutApproval, type RulesetFile } from "../../../src/core/index.js";
+import { rulesetFile } from "../../support/rulesetFile.js";
+import { approveRuleset, compareRulesets, describeProblem, loadRuleset, rulesetStatus, withoutApproval, type RulesetFile } from "../../../src/core/index.js";
 
 /** ASCE/SEI 7-16 §2.3.1 (2) and (3) [list confirmed for the 7-10 text]. */
 function base(): RulesetFile {
-  return {
-    format: RULESET_FORMAT,
+  return rulesetFile({
     id: "firm-strength",
     title: "Firm strength list",
     standard: { name: "ASCE/SEI 7", edition: "2016" },
@@ -21,8 +21,8 @@ function base(): RulesetFile {
       { id: "3", expression: "1.2D + 1.6S! + (fL*L or 0.5W)!", clause: "§2.3.1 (3)" },
     ],
     provenance: [{ source: "ASCE/SEI 7-16 §2.3.1", status: "confirmed", covers: "all" }],
-    approval: { approvedBy: null, date: null, fingerprint: null },
-  };
+  });
+
 }
 
 function load(file: RulesetFile) {

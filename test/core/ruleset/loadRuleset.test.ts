@@ -1,10 +1,10 @@
 import { describe, expect, test } from "vitest";
-import { describeProblem, loadRuleset, RULESET_FORMAT, type RulesetFile } from "../../../src/core/index.js";
+import { rulesetFile } from "../../support/rulesetFile.js";
+import { describeProblem, loadRuleset, type RulesetFile } from "../../../src/core/index.js";
 
 /** A small valid ruleset (factors from ASCE/SEI 7-16 §2.3.1 (2) and (5) [confirmed for the 7-10 list]). */
 function base(): RulesetFile {
-  return {
-    format: RULESET_FORMAT,
+  return rulesetFile({
     id: "test-strength",
     title: "Test strength combinations",
     standard: { name: "ASCE/SEI 7", edition: "2016" },
@@ -22,8 +22,8 @@ function base(): RulesetFile {
       { id: "5", expression: "0.9D + 1.0W!", clause: "§2.3.1 (5)" },
     ],
     provenance: [{ source: "ASCE/SEI 7-16 §2.3.1", status: "confirmed", covers: "all" }],
-    approval: { approvedBy: null, date: null, fingerprint: null },
-  };
+  });
+
 }
 
 function problemsOf(input: unknown): string[] {

@@ -20,8 +20,9 @@ export function memoryBackend(initial: Record<string, string> = {}): SettingsBac
     where: "memory (not saved)",
     available: () => true,
     read: (key) => values.get(key) ?? null,
-    write: async (key, value) => {
+    write: (key, value) => {
       values.set(key, value);
+      return Promise.resolve();
     },
   };
 }

@@ -5,11 +5,10 @@
  * cannot be read is never overwritten, so nothing stored is lost to a failed
  * import or a bad edit.
  */
-import { describeProblem, loadRuleset, type Problem, type Result, type Ruleset, type RulesetFile } from "../core/index.js";
+import { loadRuleset, problem, STORE_FORMAT, STORE_KEY, type Problem, type Result, type Ruleset } from "../core/index.js";
 import type { SettingsBackend } from "./settingsBackend.js";
 
-export const STORE_KEY = "loadwright.rulesets";
-export const STORE_FORMAT = "loadwright-store/1";
+export { STORE_FORMAT, STORE_KEY };
 
 export interface StoredRuleset {
   id: string;
@@ -23,7 +22,7 @@ interface StoreValue {
   rulesets: unknown[];
 }
 
-const storeProblem = (message: string): Problem => ({ kind: "ruleset-json", message, place: {} });
+const storeProblem = (message: string): Problem => problem("ruleset-store", message);
 
 export class RulesetStore {
   private cache: { text: string; entries: Result<StoredRuleset[]> } | null = null;
@@ -47,7 +46,8 @@ export class RulesetStore {
   }
 
   /** Validates, then adds or replaces the ruleset with the same id. Nothing is written unless it loads. */
-  async save(input: string | RulesetFile | unknown): Promise<Result<Ruleset>> {
+  /** `input`: JSON text or a parsed ruleset file, checked before anything is written. */
+  async save(input: unknown): Promise<Result<Ruleset>> {
     const loaded = loadRuleset(input);
     if (!loaded.ok) return loaded;
     const current = this.entries();
@@ -101,9 +101,4 @@ function parseStore(text: string, where: string): Result<StoredRuleset[]> {
       return { id, file, loaded: loadRuleset(file) };
     }),
   };
-}
-
-/** One line per problem of a stored entry, for the pane and for formula messages. */
-export function storedProblemText(entry: StoredRuleset): string {
-  return entry.loaded.ok ? "" : entry.loaded.problems.map((p) => describeProblem(p)).join("; ");
 }
