@@ -65,7 +65,7 @@ describe("LW.RULESET", () => {
     );
     await rulesetStore().save({ ...approved, combinations: approved.combinations.slice(0, 4) });
     const changed = value(evaluateFormula(RULESET, [[["test-strength"]]]));
-    expect(String(field(changed, "approval"))).toMatch(/^APPROVAL VOID \(changed since approved by A\. Checker/);
+    expect(String(field(changed, "approval"))).toMatch(/^APPROVAL VOID: CHANGED since approval by A\. Checker/);
     expect(String(changed[0][0])).toMatch(/^Checked · APPROVAL VOID/);
   });
 

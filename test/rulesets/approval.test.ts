@@ -64,6 +64,6 @@ describe("approving a shipped ruleset", () => {
     edited.combinations[0].expression = edited.combinations[0].expression.replace("1.35", "1.30");
     const status = statusOf(edited);
     expect(status.approval).toBe("changed-since-approval");
-    expect(status.summary).toMatch(/CHANGED since its approval by A\. Checker \(invented\) on 2026-11-30: the approval no longer applies/);
+    expect(status.summary).toMatch(/APPROVAL VOID: CHANGED since approval by A\. Checker \(invented\) on 2026-11-30/);
   });
 });

@@ -47,16 +47,17 @@ export function approvedByText(record: ApprovalRecord): string {
 }
 
 /**
- * The approval in three lengths. A void approval is worded three ways because
- * three surfaces have long shown it so: a formula's cell, the pane's badge and
- * the status sentence (see docs/design.md, "One vocabulary").
+ * The approval as each surface places it: in a formula's cell, in the pane's
+ * badge and within the status sentence. A void approval reads the same in all
+ * three, so an engineer who meets it in a cell finds the same words in the
+ * pane and on the command line (docs/design.md, "One vocabulary").
  */
 export interface ApprovalWords {
-  /** In a formula's stamp and LW.RULESET: "APPROVAL VOID (changed since approved by …)". */
+  /** In a formula's stamp and LW.RULESET. */
   cell: string;
-  /** The pane's badge: "APPROVAL VOID: CHANGED since approval by …". */
+  /** The pane's badge. */
   badge: string;
-  /** Within the status sentence: "CHANGED since its approval by …: the approval no longer applies". */
+  /** Within the status sentence. */
   sentence: string;
 }
 
@@ -67,12 +68,10 @@ export function approvalWords(approval: Approval, record: ApprovalRecord): Appro
       const text = `approved ${by}`;
       return { cell: text, badge: text, sentence: text };
     }
-    case "changed-since-approval":
-      return {
-        cell: `APPROVAL VOID (changed since approved ${by})`,
-        badge: `APPROVAL VOID: CHANGED since approval ${by}`,
-        sentence: `CHANGED since its approval ${by}: the approval no longer applies`,
-      };
+    case "changed-since-approval": {
+      const text = `APPROVAL VOID: CHANGED since approval ${by}`;
+      return { cell: text, badge: text, sentence: text };
+    }
     case "not-approved":
       return { cell: "not approved", badge: "not approved", sentence: "not approved" };
   }

@@ -71,7 +71,7 @@ describe("rulesetStatus", () => {
     file.combinations[0].expression = "1.2D";
     const changed = rulesetStatus(loaded(file));
     expect(changed.approval).toBe("changed-since-approval");
-    expect(changed.summary).toContain("CHANGED since its approval by A. Checker");
+    expect(changed.summary).toContain("APPROVAL VOID: CHANGED since approval by A. Checker");
   });
 
   test("shows a list typed in cells as the user's own, not checked", () => {
