@@ -34,7 +34,9 @@ export { parseParameterText, parameterPairs, type ParameterInput } from "./param
 export { resolveParameters, type ParameterValues } from "./params/resolveParameters.js";
 
 // Case tables
-export { readCaseTable, readValue, type CaseTable, type CaseTableOptions, type Orientation } from "./cases/readCaseTable.js";
+export { readCaseTable, type CaseTable, type CaseTableOptions, type Orientation } from "./cases/readCaseTable.js";
+export { readValue, type ValueOptions } from "./cases/readValue.js";
+export { resultRowReader, type ResultRow, type ResultRowOptions, type ResultRowReader } from "./cases/resultRows.js";
 export { readCaseHeaders, readCaseMap, symbolOfHeader, EMPTY_CASE_MAP, type CaseMap, type LoadCase } from "./cases/caseHeaders.js";
 
 // Planning

@@ -11,7 +11,7 @@ import {
   isBlank,
   readCaseHeaders,
   readCaseTable,
-  readValue,
+  resultRowReader,
   symbolOfHeader,
   type CaseMap,
   type CaseTable,
@@ -173,45 +173,39 @@ function caseStream(
   const width = header.cells.length;
   const named = lastNonBlank(header.cells) + 1;
   const idColumns = options.idColumns;
-  const at = csvLocator((row) => row + 1);
   if (named <= idColumns) {
     throw new CliError(`${file} line ${header.line}: the header row names no load case after the ${idColumns} result-id column${idColumns === 1 ? "" : "s"}`);
   }
   const headers = readCaseHeaders(header.cells.slice(idColumns, named), ruleset, options.map, (i) => ({ row: header.line - 1, column: i + idColumns }));
   if (!headers.ok) {
-    const error = problemsInFile(file, headers.problems, at);
+    const error = problemsInFile(file, headers.problems, csvLocator((row) => row + 1));
     // "station" right after the id column of "member,station,D,L": more columns name a result row.
     const firstUnknown = headers.problems.find((p) => p.kind === "cases-unknown-symbol" && p.place.column === idColumns);
     if (firstUnknown) error.more.push(`if column ${columnLetters(idColumns)} is part of each result row's name, say how many columns name a row: --id-columns ${idColumns + 1}`);
     throw error;
   }
   const cases = headers.value;
-  const valueOptions = { numbersAsText: true };
+  const rowReader = resultRowReader(cases, { idColumns, numbersAsText: true });
+  // Rows are counted from the header row (row 0), as the whole-table reader counts them; lines are the file's.
+  const lines = lineBook(header.line);
+  const at = csvLocator((row) => lines.lineOf(row));
+  let nextRow = 1;
 
   async function* rows(): AsyncGenerator<ResultRow> {
     let count = 0;
     const toRow = (record: CsvRecord): ResultRow | null => {
+      const row = nextRow++;
+      lines.note(row, record.line);
       if (record.cells.every(isBlank)) return null;
       checkWidth(file, record, header);
-      const problems: Problem[] = [];
-      const row = record.line - 1;
-      const id =
-        record.cells
-          .slice(0, idColumns)
-          .map(cellText)
-          .filter((t) => t !== "")
-          .join(" / ") || `line ${record.line}`;
-      const values = new Float64Array(cases.length);
-      for (let k = 0; k < cases.length; k++) {
-        values[k] = readValue(record.cells[k + idColumns], { row, column: k + idColumns }, cases[k].header, valueOptions, problems);
-      }
+      const read = rowReader.read(record.cells, row);
       for (let c = named; c < width; c++) {
         if (!isBlank(record.cells[c])) {
           throw new CliError(`${file} line ${record.line}, column ${columnLetters(c)}: a value in a column whose header is blank; name the case in the header row or clear the column`);
         }
       }
-      if (problems.length > 0) throw problemsInFile(file, problems, at);
-      return { id, values, line: record.line };
+      if (!read.ok) throw problemsInFile(file, read.problems, at);
+      return read.value && { id: read.value.id, values: read.value.values, line: record.line };
     };
     for (const record of buffered) {
       const row = toRow(record);
@@ -292,4 +286,33 @@ export function jsonErrorMessage(e: unknown): string {
     .replace(/\s*\(line \d+ column \d+\)/, "")
     .replace(/ in JSON at position \d+/, "")
     .replace(/^(Unexpected token '.'), [\s\S]*$/, "$1");
+}
+
+/**
+ * Which file line each table row (counted from the header row) starts on,
+ * for rows already read: kept as the points where a row's line stops being
+ * the previous row's line + 1 (a quoted field over several lines), so memory
+ * stays flat for a file of a million rows.
+ */
+function lineBook(headerLine: number): { note(row: number, line: number): void; lineOf(row: number): number } {
+  const rows: number[] = [0];
+  const offsets: number[] = [headerLine];
+  return {
+    note(row, line) {
+      if (line - row !== offsets[offsets.length - 1]) {
+        rows.push(row);
+        offsets.push(line - row);
+      }
+    },
+    lineOf(row) {
+      let lo = 0;
+      let hi = rows.length - 1;
+      while (lo < hi) {
+        const mid = (lo + hi + 1) >> 1;
+        if (rows[mid] <= row) lo = mid;
+        else hi = mid - 1;
+      }
+      return row + offsets[lo];
+    },
+  };
 }
