@@ -21,6 +21,7 @@ export {
 export { loadRuleset } from "./ruleset/loadRuleset.js";
 export { duplicateKeys, type DuplicateKey } from "./ruleset/jsonSyntax.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
+export { typedRuleset, clearTypedRulesets, TYPED_RULESET_LIMIT, type TypedRuleset } from "./ruleset/typedRulesets.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
 export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";
 export { rulesetStatus, combinationCoverage, VERIFICATION_TEXT, type RulesetStatus, type CombinationCoverage, type Verification, type Approval } from "./ruleset/status.js";
@@ -54,6 +55,7 @@ export { comboRows, type ComboRow } from "./evaluate/combos.js";
 export { explain, findRow, type Explanation, type ExplanationLine } from "./evaluate/explain.js";
 export { DEFAULT_ROW_LIMIT, enumerateRows, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
 export { planForTable } from "./planForTable.js";
+export { cachedPlanForTable, cachedPlanCount, clearPlanCache, PLAN_CACHE_LIMIT } from "./plan/planCache.js";
 
 // Shipped rulesets
 export { shippedRulesets, findShippedRuleset, type ShippedRuleset } from "./library/shippedRulesets.js";

@@ -3,7 +3,7 @@
  * with Loadwright, or a range of [id, expression, clause] rows typed in cells.
  */
 import { closest } from "fastest-levenshtein";
-import { RULESET_ID_PATTERN, rulesetFromRows, rulesetStatus, type Cell, type Problem, type Result } from "../core/index.js";
+import { RULESET_ID_PATTERN, typedRuleset, type Cell, type Problem, type Result } from "../core/index.js";
 import { findInLibrary, library, storeLocation } from "../addin/rulesetLibrary.js";
 import { asMatrix, blankZeroRows, isEmptyArgument } from "./excelCells.js";
 import type { ResolvedRuleset } from "./formula.js";
@@ -57,15 +57,15 @@ function byId(id: string): Result<ResolvedRuleset> {
 }
 
 function typed(rows: Cell[][]): Result<ResolvedRuleset> {
-  const loaded = rulesetFromRows(rows);
+  const loaded = typedRuleset(rows);
   if (!loaded.ok) return loaded;
-  const ruleset = loaded.value;
+  const { ruleset, status } = loaded.value;
   const width = Math.max(0, ...rows.map((r) => r.length));
   return {
     ok: true,
     value: {
       ruleset,
-      status: rulesetStatus(ruleset),
+      status,
       source: "cells",
       shippedFingerprint: null,
       entryRows: new Map(ruleset.combinations.map((c) => [c.id, c.sourceRow ?? 0])),

@@ -1,9 +1,10 @@
 /** What the table formulas share: the plan for the arguments read, and the size of row labels for the payload guard. */
-import { enumerateRows, planForTable, rowLabel, type Plan, type Problem, type Result } from "../../core/index.js";
+import { cachedPlanForTable, enumerateRows, rowLabel, type Plan, type Problem, type Result } from "../../core/index.js";
 import { given, type FormulaArguments } from "../formula.js";
 
 export function planOf(args: FormulaArguments): Result<Plan> {
-  return planForTable(given(args.ruleset, "ruleset").ruleset, args.params.input, args.table);
+  const { ruleset, status } = given(args.ruleset, "ruleset");
+  return cachedPlanForTable(ruleset, status.fingerprint, args.params.input, args.table);
 }
 
 /** Bytes of label per row, estimated from the first rows (with a margin): labels of one ruleset are alike in length. */
