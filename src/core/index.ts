@@ -47,13 +47,14 @@ export type { Plan, PlanCase, PlannedCombination, RowRef } from "./plan/types.js
 
 // Evaluation
 export { envelope, envelopeOf, type EnvelopeEntry, type EnvelopeValue } from "./evaluate/envelope.js";
-export { extremes, type Extreme, type Extremes } from "./evaluate/extremes.js";
+export { extremes, extremesEvaluator, type Extreme, type Extremes, type ExtremesEvaluator, type RowExtremes } from "./evaluate/extremes.js";
+export { compiledPlanOf, type CompiledPlan } from "./plan/compiledPlan.js";
 export { governing, defaultCriteria, type GoverningRow, type GoverningOptions } from "./evaluate/governing.js";
 export { parseCriterion, type Criterion } from "./evaluate/criteria.js";
 export { factored, type FactoredRow } from "./evaluate/factored.js";
 export { comboRows, type ComboRow } from "./evaluate/combos.js";
 export { explain, findRow, type Explanation, type ExplanationLine } from "./evaluate/explain.js";
-export { DEFAULT_ROW_LIMIT, enumerateRows, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
+export { DEFAULT_ROW_LIMIT, enumerateRows, labelOf, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
 export { planForTable } from "./planForTable.js";
 export { cachedPlanForTable, cachedPlanCount, clearPlanCache, PLAN_CACHE_LIMIT } from "./plan/planCache.js";
 

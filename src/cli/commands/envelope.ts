@@ -1,10 +1,10 @@
 /** `loadwright envelope FILE`: per component or result row, the largest and smallest value with the row that gives each. */
-import { envelopeOf } from "../../core/index.js";
-import { jsonNumber, numberText } from "../output/cells.js";
+import { compiledPlanOf, extremesEvaluator, labelOf } from "../../core/index.js";
+import { csvField, jsonNumber, numberText } from "../output/cells.js";
 import { streamedJsonStart } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
-import { resultsOf } from "./results.js";
+import { resultBatches } from "./results.js";
 
 export async function envelopeCommand(file: string, options: CaseOptions, io: Io): Promise<void> {
   const prepared = await prepare(file, options, io);
@@ -12,25 +12,54 @@ export async function envelopeCommand(file: string, options: CaseOptions, io: Io
   if (plan.rowCount === 0) throw noRowsError(plan, file);
   await writePreamble(io, prepared);
   const { out } = io;
+  const compiled = compiledPlanOf(plan);
+  const evaluator = extremesEvaluator(compiled);
+
+  // Every result row, in file order: its envelope, checked finite, with the labels of its two rows.
+  async function each(write: (id: string, max: number, maxLabel: string, min: number, minLabel: string) => void | Promise<void>): Promise<boolean> {
+    for await (const batch of resultBatches(input, "envelope")) {
+      const cases = batch.cases;
+      for (let n = 0; n < batch.count; n++) {
+        const e = evaluator.evaluateAt(batch.values, n * cases);
+        if (!e) throw noRowsError(plan, file);
+        const id = batch.ids[n];
+        const max = finiteOrFail(e.maxValue, file, batch.where(n));
+        const min = finiteOrFail(e.minValue, file, batch.where(n));
+        await write(id, max, labelOf(compiled, e.maxBranch, e.maxChoices), min, labelOf(compiled, e.minBranch, e.minChoices));
+      }
+      await out.maybeFlush();
+      if (out.isClosed) return false;
+    }
+    return true;
+  }
 
   if (format === "json") {
     out.line(streamedJsonStart(chosen, plan, "envelope"));
     let first = true;
-    for await (const r of resultsOf(input, "envelope")) {
-      const e = envelopeOf(plan, r.id, r.values);
-      if (!e) throw noRowsError(plan, file);
-      const entry = {
-        result: r.id,
-        max: { value: jsonNumber(finiteOrFail(e.max.value, file, r.where)), row: e.max.label },
-        min: { value: jsonNumber(finiteOrFail(e.min.value, file, r.where)), row: e.min.label },
-      };
+    const done = await each((result, max, maxRow, min, minRow) => {
+      const entry = { result, max: { value: jsonNumber(max), row: maxRow }, min: { value: jsonNumber(min), row: minRow } };
       out.line(`${first ? "" : ","}${JSON.stringify(entry)}`);
       first = false;
-      await out.maybeFlush();
-      if (out.isClosed) return;
-    }
+    });
+    if (!done) return;
     out.line("]}");
     await out.flush();
+    return;
+  }
+
+  if (format === "csv") {
+    // The hot path of a large export: a few labels, written again and again, escaped once each.
+    out.line("result,max,max row,min,min row");
+    const escaped = new Map<string, string>();
+    const field = (label: string) => {
+      let text = escaped.get(label);
+      if (text === undefined) escaped.set(label, (text = csvField(label)));
+      return text;
+    };
+    const done = await each((id, max, maxRow, min, minRow) => {
+      out.line(`${csvField(id)},${numberText(max)},${field(maxRow)},${numberText(min)},${field(minRow)}`);
+    });
+    if (done) await out.flush();
     return;
   }
 
@@ -41,17 +70,6 @@ export async function envelopeCommand(file: string, options: CaseOptions, io: Io
     { title: "min", align: "right" },
     { title: "min row" },
   ]);
-  for await (const r of resultsOf(input, "envelope")) {
-    const e = envelopeOf(plan, r.id, r.values);
-    if (!e) throw noRowsError(plan, file);
-    await writer.row([
-      r.id,
-      numberText(finiteOrFail(e.max.value, file, r.where)),
-      e.max.label,
-      numberText(finiteOrFail(e.min.value, file, r.where)),
-      e.min.label,
-    ]);
-    if (out.isClosed) return;
-  }
-  await writer.end();
+  const done = await each((id, max, maxRow, min, minRow) => writer.row([id, numberText(max), maxRow, numberText(min), minRow]));
+  if (done) await writer.end();
 }

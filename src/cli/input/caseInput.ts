@@ -11,6 +11,7 @@ import {
   isBlank,
   readCaseHeaders,
   readCaseTable,
+  readValue,
   resultRowReader,
   symbolOfHeader,
   type CaseMap,
@@ -22,7 +23,9 @@ import {
   type Ruleset,
 } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
-import { readCsv, type CsvReader, type CsvRecord } from "./csvRecords.js";
+import type { CsvRecord } from "./csvRecords.js";
+import { decimalAt } from "./csvScanner.js";
+import { CsvSource } from "./csvSource.js";
 import { checkReadable, readText } from "./fileAccess.js";
 import { offsetOfPath, positionOf, syntaxErrorOffset } from "./jsonLocation.js";
 import { csvLocator, describeInFile, type CellLocator } from "./locate.js";
@@ -35,6 +38,15 @@ export interface CaseFileOptions {
   idColumns: number;
   delimiter: string;
   map: CaseMap;
+}
+
+/** Result rows of a cases-as-columns file, a batch at a time; the batch is reused, so read it before asking for the next. */
+export interface RowBatch {
+  count: number;
+  ids: string[];
+  /** count × cases values, row after row, in the order of `cases`. */
+  values: Float64Array;
+  lines: Int32Array;
 }
 
 /** One result row of a cases-as-columns file. */
@@ -52,6 +64,8 @@ export interface CaseStream {
   map: CaseMap;
   /** The header row as written, for naming columns. */
   idHeaders: string[];
+  /** The result rows in batches (fast), or one at a time (`rows`); use one of the two, once. */
+  batches: AsyncGenerator<RowBatch>;
   rows: AsyncGenerator<ResultRow>;
   totalBytes: number;
   bytesRead(): number;
@@ -76,8 +90,8 @@ export function tableShape(input: CaseInput): CaseTable {
 export async function openCases(file: string, ruleset: Ruleset, options: CaseFileOptions): Promise<CaseInput> {
   if (/\.json$/i.test(file)) return openJsonCases(file, ruleset, options);
   const totalBytes = checkReadable(file, "case file");
-  const reader = readCsv(file, { delimiter: options.delimiter });
-  const first = await firstRecord(reader);
+  const source = await CsvSource.open(file, options.delimiter);
+  const first = await firstRecord(source);
   if (!first) throw new CliError(`${file}: the file is empty; a case file starts with a header row (docs/case-tables.md)`);
   const lastNamed = lastNonBlank(first.cells);
   const reads = (cell: Cell) => !("error" in symbolOfHeader(cellText(cell), ruleset, options.map));
@@ -86,31 +100,38 @@ export async function openCases(file: string, ruleset: Ruleset, options: CaseFil
   const headerReaders = headerCells.filter(reads).length;
   const buffered: CsvRecord[] = [];
   const whole = async (): Promise<CaseFile> => {
-    for await (const record of reader.records) buffered.push(record);
+    for (let record = await nextRecord(source); record; record = await nextRecord(source)) buffered.push(record);
     return wholeTable(file, [first, ...buffered], ruleset, options, reads);
   };
   if (options.layout === "rows" || (options.layout === "auto" && headerReaders === 0)) return whole();
   if (options.layout === "auto") {
     // Cases as columns if the header row names cases and the first result row's id does not read as one.
     for (;;) {
-      const next = await reader.records.next();
-      if (next.done) return wholeTable(file, [first, ...buffered], ruleset, options, reads);
-      buffered.push(next.value);
-      const firstCell = next.value.cells[0];
+      const next = await nextRecord(source);
+      if (!next) return wholeTable(file, [first, ...buffered], ruleset, options, reads);
+      buffered.push(next);
+      const firstCell = next.cells[0];
       if (isBlank(firstCell)) continue;
       if (reads(firstCell)) return whole();
       break;
     }
   }
-  return caseStream(file, first, buffered, reader, ruleset, options, totalBytes);
+  return caseStream(file, first, buffered, source, ruleset, options, totalBytes);
 }
 
-async function firstRecord(reader: CsvReader): Promise<CsvRecord | null> {
+/** The next record as cells, or null at the end of the file. */
+async function nextRecord(source: CsvSource): Promise<CsvRecord | null> {
   for (;;) {
-    const next = await reader.records.next();
-    if (next.done) return null;
-    if (!next.value.cells.every(isBlank)) return next.value;
+    const step = source.next();
+    if (step === "record") return source.record();
+    if (step === "end") return null;
+    await source.refill();
   }
+}
+
+async function firstRecord(source: CsvSource): Promise<CsvRecord | null> {
+  for (let record = await nextRecord(source); record; record = await nextRecord(source)) if (!record.cells.every(isBlank)) return record;
+  return null;
 }
 
 function lastNonBlank(cells: Cell[]): number {
@@ -165,7 +186,7 @@ function caseStream(
   file: string,
   header: CsvRecord,
   buffered: CsvRecord[],
-  reader: CsvReader,
+  source: CsvSource,
   ruleset: Ruleset,
   options: CaseFileOptions,
   totalBytes: number,
@@ -185,43 +206,110 @@ function caseStream(
     throw error;
   }
   const cases = headers.value;
+  const caseCount = cases.length;
   const rowReader = resultRowReader(cases, { idColumns, numbersAsText: true });
   // Rows are counted from the header row (row 0), as the whole-table reader counts them; lines are the file's.
   const lines = lineBook(header.line);
   const at = csvLocator((row) => lines.lineOf(row));
   let nextRow = 1;
 
-  async function* rows(): AsyncGenerator<ResultRow> {
+  const batch: RowBatch = { count: 0, ids: new Array<string>(BATCH_ROWS), values: new Float64Array(BATCH_ROWS * caseCount), lines: new Int32Array(BATCH_ROWS) };
+  const problems: Problem[] = [];
+
+  const refuseWidth = (fields: number, line: number) => {
+    const where = fields < width ? `column ${columnLetters(fields)}` : `column ${columnLetters(width)}`;
+    return new CliError(
+      `${file} line ${line}, ${where}: the row has ${fields} field${fields === 1 ? "" : "s"} where the header row (line ${header.line}) has ${width}; every row of a case table has the header row's width`,
+    );
+  };
+  const refuseUnnamed = (column: number, line: number) =>
+    new CliError(`${file} line ${line}, column ${columnLetters(column)}: a value in a column whose header is blank; name the case in the header row or clear the column`);
+
+  /** A record given as cells (read while the layout was decided, or by csv-parse): the core reads it whole. */
+  const addCells = (record: CsvRecord): void => {
+    const row = nextRow++;
+    lines.note(row, record.line);
+    if (record.cells.every(isBlank)) return;
+    if (record.cells.length !== width) throw refuseWidth(record.cells.length, record.line);
+    const read = rowReader.read(record.cells, row);
+    for (let c = named; c < width; c++) if (!isBlank(record.cells[c])) throw refuseUnnamed(c, record.line);
+    if (!read.ok) throw problemsInFile(file, read.problems, at);
+    if (!read.value) return;
+    const n = batch.count++;
+    batch.ids[n] = read.value.id;
+    batch.values.set(read.value.values, n * caseCount);
+    batch.lines[n] = record.line;
+  };
+
+  /**
+   * A record in the scanner's fields: the same reading as the core's, with each
+   * value read from its bytes where it is a plain decimal number, and by the
+   * core's readValue from its text otherwise (blanks, spaces, text: its words).
+   */
+  const addScanned = (): void => {
+    const row = nextRow++;
+    const line = source.line;
+    lines.note(row, line);
+    const scanner = source.scanner;
+    const fields = scanner.fieldCount;
+    if (allBlank(source)) return;
+    if (fields !== width) throw refuseWidth(fields, line);
+    const idCells: string[] = [];
+    for (let c = 0; c < idColumns; c++) idCells.push(source.text(c));
+    const id = rowReader.idOf(idCells, row);
+    problems.length = 0;
+    const repeated = rowReader.claim(id, row);
+    if (repeated) problems.push(repeated);
+    const n = batch.count;
+    const base = n * caseCount;
+    const { buf, fieldStart, fieldEnd } = scanner;
+    for (let k = 0; k < caseCount; k++) {
+      const c = k + idColumns;
+      let v = decimalAt(buf, fieldStart[c], fieldEnd[c]);
+      if (v !== v) v = readValue(source.text(c), { row, column: c }, cases[k].header, VALUE_OPTIONS, problems);
+      batch.values[base + k] = v;
+    }
+    for (let c = named; c < width; c++) if (!fieldBlank(source, c)) throw refuseUnnamed(c, line);
+    if (problems.length > 0) throw problemsInFile(file, problems, at);
+    batch.count = n + 1;
+    batch.ids[n] = id;
+    batch.lines[n] = line;
+  };
+
+  async function* batches(): AsyncGenerator<RowBatch> {
     let count = 0;
-    const toRow = (record: CsvRecord): ResultRow | null => {
-      const row = nextRow++;
-      lines.note(row, record.line);
-      if (record.cells.every(isBlank)) return null;
-      checkWidth(file, record, header);
-      const read = rowReader.read(record.cells, row);
-      for (let c = named; c < width; c++) {
-        if (!isBlank(record.cells[c])) {
-          throw new CliError(`${file} line ${record.line}, column ${columnLetters(c)}: a value in a column whose header is blank; name the case in the header row or clear the column`);
+    try {
+      for (const record of buffered) addCells(record);
+      for (;;) {
+        const step = source.next();
+        if (step === "record") {
+          if (source.fromBytes) addScanned();
+          else addCells(source.record());
+          if (batch.count === BATCH_ROWS) {
+            count += batch.count;
+            yield batch;
+            batch.count = 0;
+          }
+          continue;
         }
+        if (step === "end") break;
+        await source.refill();
       }
-      if (!read.ok) throw problemsInFile(file, read.problems, at);
-      return read.value && { id: read.value.id, values: read.value.values, line: record.line };
-    };
-    for (const record of buffered) {
-      const row = toRow(record);
-      if (row) {
-        count++;
-        yield row;
+      if (batch.count > 0) {
+        count += batch.count;
+        yield batch;
+        batch.count = 0;
       }
+      if (count === 0) throw new CliError(`${file}: the case table has no result rows below its header row`);
+    } finally {
+      await source.close();
     }
-    for await (const record of reader.records) {
-      const row = toRow(record);
-      if (row) {
-        count++;
-        yield row;
-      }
+  }
+
+  async function* rows(): AsyncGenerator<ResultRow> {
+    for await (const b of batches()) {
+      for (let n = 0; n < b.count; n++) yield { id: b.ids[n], values: b.values.slice(n * caseCount, (n + 1) * caseCount), line: b.lines[n] };
     }
-    if (count === 0) throw new CliError(`${file}: the case table has no result rows below its header row`);
   }
 
   return {
@@ -230,13 +318,33 @@ function caseStream(
     cases,
     map: options.map,
     idHeaders: header.cells.slice(0, idColumns).map(cellText),
+    batches: batches(),
     rows: rows(),
     totalBytes,
-    bytesRead: reader.bytesRead,
-    close: async () => {
-      await reader.records.return(undefined);
-    },
+    bytesRead: () => source.bytesRead(),
+    close: () => source.close(),
   };
+}
+
+/** Result rows handed over at a time: enough to make the cost per batch negligible, few enough to stay small. */
+const BATCH_ROWS = 1024;
+const VALUE_OPTIONS = { numbersAsText: true };
+
+/** A field is blank as the core's isBlank says: nothing but white space. */
+function fieldBlank(source: CsvSource, k: number): boolean {
+  const { buf, fieldStart, fieldEnd } = source.scanner;
+  for (let p = fieldStart[k]; p < fieldEnd[k]; p++) {
+    const b = buf[p];
+    if (b === 0x20 || (b >= 0x09 && b <= 0x0d)) continue;
+    // Other white space (no-break space, …) is not ASCII: the text decides.
+    return b < 0x80 ? false : isBlank(source.text(k));
+  }
+  return true;
+}
+
+function allBlank(source: CsvSource): boolean {
+  for (let k = 0; k < source.scanner.fieldCount; k++) if (!fieldBlank(source, k)) return false;
+  return true;
 }
 
 function openJsonCases(file: string, ruleset: Ruleset, options: CaseFileOptions): CaseFile {

@@ -49,6 +49,8 @@ export interface ExtremesEvaluator {
   compiled: CompiledPlan;
   /** The extremes for case values x (one per case, in the plan's case order), or null when the plan has no rows. */
   evaluate(x: ArrayLike<number>): RowExtremes | null;
+  /** The same for the case values x[offset] … x[offset + cases − 1] (one row of a block of rows). */
+  evaluateAt(x: ArrayLike<number>, offset: number): RowExtremes | null;
 }
 
 const shared = new WeakMap<CompiledPlan, ExtremesEvaluator>();
@@ -80,10 +82,10 @@ export function extremesEvaluator(compiled: CompiledPlan): ExtremesEvaluator {
     minChoices: new Int32Array(compiled.maxTerms),
   };
 
-  function evaluate(x: ArrayLike<number>): RowExtremes | null {
+  function evaluateAt(x: ArrayLike<number>, offset: number): RowExtremes | null {
     for (let o = 0; o < optionCount; o++) {
       let v = 0;
-      for (let k = optionStart[o], end = optionStart[o + 1]; k < end; k++) v += optionFactor[k] * x[optionCase[k]];
+      for (let k = optionStart[o], end = optionStart[o + 1]; k < end; k++) v += optionFactor[k] * x[offset + optionCase[k]];
       optionValue[o] = v;
     }
     for (let t = 0; t < termCount; t++) {
@@ -145,5 +147,5 @@ export function extremesEvaluator(compiled: CompiledPlan): ExtremesEvaluator {
     return out;
   }
 
-  return { compiled, evaluate };
+  return { compiled, evaluateAt, evaluate: (x) => evaluateAt(x, 0) };
 }
