@@ -38,6 +38,8 @@ export interface CaseFileOptions {
   idColumns: number;
   delimiter: string;
   map: CaseMap;
+  /** How records are found: in the file's bytes ("bytes", the default), or by csv-parse alone (the general reader the scanner is held to). */
+  reader?: "bytes" | "csv-parse";
 }
 
 /** Result rows of a cases-as-columns file, a batch at a time; the batch is reused, so read it before asking for the next. */
@@ -90,7 +92,7 @@ export function tableShape(input: CaseInput): CaseTable {
 export async function openCases(file: string, ruleset: Ruleset, options: CaseFileOptions): Promise<CaseInput> {
   if (/\.json$/i.test(file)) return openJsonCases(file, ruleset, options);
   const totalBytes = checkReadable(file, "case file");
-  const source = await CsvSource.open(file, options.delimiter);
+  const source = await CsvSource.open(file, options.delimiter, options.reader ?? "bytes");
   const first = await firstRecord(source);
   if (!first) throw new CliError(`${file}: the file is empty; a case file starts with a header row (docs/case-tables.md)`);
   const lastNamed = lastNonBlank(first.cells);

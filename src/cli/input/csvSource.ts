@@ -25,7 +25,7 @@ export class CsvSource {
   /** 1-based file line the current record starts on. */
   line = 0;
 
-  private buffer: Buffer = Buffer.alloc(CHUNK);
+  private buffer: Buffer;
   private filled = 0;
   private bytesDone = 0;
   private atEnd = false;
@@ -41,25 +41,28 @@ export class CsvSource {
     readonly path: string,
     readonly delimiter: string,
     private file: FileHandle | null,
+    chunkBytes: number,
   ) {
+    this.buffer = Buffer.alloc(chunkBytes);
     const code = Buffer.from(delimiter, "utf8");
     this.scanner = new CsvScanner(code.length === 1 ? code[0] : 0);
   }
 
-  static async open(path: string, delimiter: string): Promise<CsvSource> {
+  /** `chunkBytes`: how much is read at a time (small sizes test records split across reads). */
+  static async open(path: string, delimiter: string, reader: "bytes" | "csv-parse" = "bytes", chunkBytes = CHUNK): Promise<CsvSource> {
     let file: FileHandle;
     try {
       file = await open(path, "r");
     } catch (e) {
       throw new CliError(`${path}: ${fileErrorText(e)}`);
     }
-    const source = new CsvSource(path, delimiter, file);
+    const source = new CsvSource(path, delimiter, file, chunkBytes);
     await source.read();
     const b = source.buffer;
     const oneByte = Buffer.byteLength(delimiter, "utf8") === 1 && !/[\d+\-.eE\s]/.test(delimiter);
     // csv-parse looks for a byte order mark in the first three bytes only.
     const utf16 = source.filled >= 3 && b[0] === 0xff && b[1] === 0xfe;
-    if (!oneByte || utf16 || source.filled < 3) source.handOver = true;
+    if (reader === "csv-parse" || !oneByte || utf16 || source.filled < 3) source.handOver = true;
     else {
       const skip = b[0] === 0xef && b[1] === 0xbb && b[2] === 0xbf ? 3 : 0;
       source.scanner.feed(source.buffer, source.filled, source.atEnd);
