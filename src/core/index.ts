@@ -38,7 +38,7 @@ export { resolveParameters, type ParameterValues } from "./params/resolveParamet
 export { readCaseTable, type CaseTable, type CaseTableOptions, type Orientation } from "./cases/readCaseTable.js";
 export { readValue, type ValueOptions } from "./cases/readValue.js";
 export { resultRowReader, type ResultRow, type ResultRowOptions, type ResultRowReader } from "./cases/resultRows.js";
-export { readCaseHeaders, readCaseMap, symbolOfHeader, EMPTY_CASE_MAP, type CaseMap, type LoadCase } from "./cases/caseHeaders.js";
+export { namesLoadSymbol, readCaseHeaders, readCaseMap, symbolOfHeader, EMPTY_CASE_MAP, type CaseMap, type LoadCase } from "./cases/caseHeaders.js";
 
 // Planning
 export { planCombinations, MAX_BRANCHES, type PlanInput } from "./plan/planCombinations.js";

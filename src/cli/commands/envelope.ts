@@ -22,10 +22,10 @@ export async function envelopeCommand(file: string, options: CaseOptions, io: Io
       for (let n = 0; n < batch.count; n++) {
         const e = evaluator.evaluateAt(batch.values, n * cases);
         if (!e) throw noRowsError(plan, file);
-        const id = batch.ids[n];
-        const max = finiteOrFail(e.maxValue, file, batch.where(n));
-        const min = finiteOrFail(e.minValue, file, batch.where(n));
-        await write(id, max, labelOf(compiled, e.maxBranch, e.maxChoices), min, labelOf(compiled, e.minBranch, e.minChoices));
+        const { maxValue: max, minValue: min } = e;
+        // Where the row is is worded only when it is needed.
+        if (!Number.isFinite(max) || !Number.isFinite(min)) finiteOrFail(Number.isFinite(max) ? min : max, file, batch.where(n));
+        await write(batch.ids[n], max, labelOf(compiled, e.maxBranch, e.maxChoices), min, labelOf(compiled, e.minBranch, e.minChoices));
       }
       await out.maybeFlush();
       if (out.isClosed) return false;

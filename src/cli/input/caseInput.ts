@@ -12,8 +12,8 @@ import {
   readCaseHeaders,
   readCaseTable,
   readValue,
+  namesLoadSymbol,
   resultRowReader,
-  symbolOfHeader,
   type CaseMap,
   type CaseTable,
   type Cell,
@@ -96,7 +96,7 @@ export async function openCases(file: string, ruleset: Ruleset, options: CaseFil
   const first = await firstRecord(source);
   if (!first) throw new CliError(`${file}: the file is empty; a case file starts with a header row (docs/case-tables.md)`);
   const lastNamed = lastNonBlank(first.cells);
-  const reads = (cell: Cell) => !("error" in symbolOfHeader(cellText(cell), ruleset, options.map));
+  const reads = (cell: Cell) => namesLoadSymbol(cellText(cell), ruleset, options.map);
 
   const headerCells = first.cells.slice(options.idColumns, lastNamed + 1);
   const headerReaders = headerCells.filter(reads).length;

@@ -14,7 +14,7 @@
 import { cellText, isBlank, type Cell } from "../cells.js";
 import { fail, ok, problem, type Problem, type Result } from "../problems.js";
 import type { Ruleset } from "../ruleset/model.js";
-import { EMPTY_CASE_MAP, readCaseHeaders, symbolOfHeader, type CaseMap, type LoadCase } from "./caseHeaders.js";
+import { EMPTY_CASE_MAP, namesLoadSymbol, readCaseHeaders, type CaseMap, type LoadCase } from "./caseHeaders.js";
 import { resultRowReader } from "./resultRows.js";
 import { readValue } from "./readValue.js";
 
@@ -77,7 +77,7 @@ function trimBlankEdges(matrix: Cell[][]): Cell[][] {
  * so that one mistyped header is reported by name rather than as "no cases".
  */
 function detectOrientation(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idColumns: number): Result<Orientation> {
-  const share = (cells: Cell[]) => (cells.length === 0 ? 0 : cells.filter((c) => !("error" in symbolOfHeader(cellText(c), ruleset, map))).length / cells.length);
+  const share = (cells: Cell[]) => (cells.length === 0 ? 0 : cells.filter((c) => namesLoadSymbol(cellText(c), ruleset, map)).length / cells.length);
   const firstRow = rows[0].slice(idColumns).filter((c) => !isBlank(c));
   const firstColumn = rows.slice(1).map((r) => r[0]).filter((c) => !isBlank(c));
   const asColumns = share(firstRow);

@@ -155,7 +155,9 @@ export function compilePlan(plan: Plan): CompiledPlan {
 /** The plan's own reference to a row: flat branch b and one option per term. */
 export function rowRefOf(c: CompiledPlan, branch: number, choices: ArrayLike<number>): RowRef {
   const terms = c.branchStart[branch + 1] - c.branchStart[branch];
-  return { combination: c.branchCombination[branch], branch: c.branchWithin[branch], choices: Array.from({ length: terms }, (_, t) => choices[t]) };
+  const copy = new Array<number>(terms);
+  for (let t = 0; t < terms; t++) copy[t] = choices[t];
+  return { combination: c.branchCombination[branch], branch: c.branchWithin[branch], choices: copy };
 }
 
 /** The flat branch of a row reference. */
