@@ -8,7 +8,35 @@ export function numberText(value: number): string {
   // (and no exponent) has at most 12 significant digits, which is what formatNumber would write.
   const plain = String(value);
   if (plain.length <= 12 && !plain.includes("e")) return plain;
-  return formatNumber(value);
+  return roundedText(value) ?? formatNumber(value);
+}
+
+/** Powers of ten, every one a double exactly. */
+const POWERS = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11];
+
+/**
+ * formatNumber's text for 1 ≤ |value| < 1e11, without toPrecision: with k
+ * decimals to keep 12 significant digits, the digits are n = round(value × 10^k)
+ * — exact where value × 10^k (below 1e12, so off by less than 1e-4) is not
+ * within 0.001 of a half — and n / 10^k, one division of exact doubles, is the
+ * double nearest the 12-digit decimal, as Number(value.toPrecision(12)) is.
+ * Null where that cannot be told this way; the caller then asks formatNumber.
+ */
+function roundedText(value: number): string | null {
+  const size = Math.abs(value);
+  if (!(size >= 1 && size < 1e11)) return null;
+  let exponent = Math.floor(Math.log10(size));
+  // log10 may be off by one next to a power of ten: settle it with the exact powers.
+  if (POWERS[exponent] > size) exponent--;
+  else if (POWERS[exponent + 1] <= size) exponent++;
+  const decimals = 11 - exponent;
+  const scaled = size * POWERS[decimals];
+  const whole = Math.floor(scaled);
+  const fraction = scaled - whole;
+  if (Math.abs(fraction - 0.5) < 1e-3) return null;
+  const digits = fraction > 0.5 ? whole + 1 : whole;
+  const rounded = digits / POWERS[decimals];
+  return String(value < 0 ? -rounded : rounded);
 }
 
 /** A JSON number: full precision, -0 written as 0. */
