@@ -43,6 +43,14 @@ describe("numberText", () => {
       }),
       { numRuns: 50_000 },
     );
-    for (const v of [1, 9.999999999995, 99999999999.95, 1e11 - 1e-4, 0.5 + 1e-12, 123456.7890125, 10, 100.0000000000005]) expect(numberText(v)).toBe(formatNumber(v));
+    fc.assert(
+      fc.property(fc.integer({ min: -(10 ** 12), max: 10 ** 12 }), fc.integer({ min: 0, max: 6 }), (n, decimals) => {
+        const x = n / 10 ** decimals;
+        expect(numberText(x)).toBe(formatNumber(x === 0 ? 0 : x));
+      }),
+      { numRuns: 50_000 },
+    );
+    for (const v of [1, 9.999999999995, 99999999999.95, 1e11 - 1e-4, 0.5 + 1e-12, 123456.7890125, 10, 100.0000000000005, 0.1, 0.0001, 0.00005, 99999999.9999, 1e8, -0.5, 12.3])
+      expect(numberText(v)).toBe(formatNumber(v));
   });
 });

@@ -4,11 +4,38 @@ import { formatNumber } from "../../core/index.js";
 /** 12 significant digits (168, not 168.00000000000003); never "-0". JSON keeps full precision. */
 export function numberText(value: number): string {
   if (value === 0) return "0";
+  const short = fourDecimalText(value);
+  if (short !== null) return short;
   // Fast path for a streamed million rows: a number whose shortest form has at most 12 characters
   // (and no exponent) has at most 12 significant digits, which is what formatNumber would write.
   const plain = String(value);
   if (plain.length <= 12 && !plain.includes("e")) return plain;
   return roundedText(value) ?? formatNumber(value);
+}
+
+/**
+ * The text of a value that is the double nearest a decimal with at most four
+ * decimals and |value| < 1e8 (factored two-decimal results often are), written
+ * from integers — null otherwise. Such a decimal is the only one of four
+ * decimals or fewer that reads back as the value (two of them differ by 1e-4,
+ * far more than a double's spacing below 1e8), so it is the value's shortest
+ * form, String(value); and with at most 8 + 4 significant digits it is also
+ * what the 12-digit rule writes.
+ */
+function fourDecimalText(value: number): string | null {
+  const size = Math.abs(value);
+  if (!(size < 1e8)) return null;
+  const scaled = Math.round(size * 1e4);
+  if (scaled / 1e4 !== size) return null;
+  const whole = Math.floor(scaled / 1e4);
+  const fraction = scaled - whole * 1e4;
+  let text = String(whole);
+  if (fraction !== 0) {
+    let digits = String(fraction).padStart(4, "0");
+    while (digits.endsWith("0")) digits = digits.slice(0, -1);
+    text += `.${digits}`;
+  }
+  return value < 0 ? `-${text}` : text;
 }
 
 /** Powers of ten, every one a double exactly. */
