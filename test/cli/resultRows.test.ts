@@ -85,3 +85,20 @@ describe("a value that is not a number", () => {
     expect(!formula.ok && formula.message).toBe('cases, Loads!C2 (Q): "n/a" is not a number');
   });
 });
+
+describe("a streamed file with a bad row", () => {
+  test("gives the envelope of every row before it, then stops with the error (docs/command-line.md, errors)", async () => {
+    // 3,000 rows of G = 10, Q = 5 (invented); row 2,501 of the file's result rows holds text.
+    const lines = ["result,G,Q", ...Array.from({ length: 3000 }, (_, i) => `R${i + 1},10,${i === 2500 ? "n/a" : 5}`)];
+    writeFileSync(join(dir, "bad-late.csv"), lines.join("\n") + "\n");
+    const run = await loadwright(["envelope", "bad-late.csv", "--ruleset", RULESET, "--format", "csv"], { cwd: dir });
+    expect(run.status).toBe(1);
+    expect(errorsOf(run.stderr)).toEqual(['bad-late.csv line 2502, column C (Q): "n/a" is not a number']);
+    const rows = csvRows(run.stdout);
+    expect(rows[0]).toEqual(["result", "max", "max row", "min", "min row"]);
+    expect(rows.slice(1).map((r) => r[0])).toEqual(Array.from({ length: 2500 }, (_, i) => `R${i + 1}`));
+    // EN 1990 (6.10) with G = 10, Q = 5: max 1.35 × 10 + 1.5 × 5 = 21 (Q leading); min 1.0 × 10 = 10 (Q absent) [EN 1990 A1 Table A1.2(B), recommended γ].
+    expect(rows[1].slice(1, 2).map(Number)).toEqual([21]);
+    expect(Number(rows[1][3])).toBe(10);
+  });
+});

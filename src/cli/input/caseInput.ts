@@ -280,28 +280,35 @@ function caseStream(
 
   async function* batches(): AsyncGenerator<RowBatch> {
     let count = 0;
+    let stopped: unknown = null;
     try {
-      for (const record of buffered) addCells(record);
-      for (;;) {
-        const step = source.next();
-        if (step === "record") {
-          if (source.fromBytes) addScanned();
-          else addCells(source.record());
-          if (batch.count === BATCH_ROWS) {
-            count += batch.count;
-            yield batch;
-            batch.count = 0;
+      try {
+        for (const record of buffered) addCells(record);
+        for (;;) {
+          const step = source.next();
+          if (step === "record") {
+            if (source.fromBytes) addScanned();
+            else addCells(source.record());
+            if (batch.count === BATCH_ROWS) {
+              count += batch.count;
+              yield batch;
+              batch.count = 0;
+            }
+            continue;
           }
-          continue;
+          if (step === "end") break;
+          await source.refill();
         }
-        if (step === "end") break;
-        await source.refill();
+      } catch (e) {
+        // The rows before a bad one are given first, as a row-by-row reader gives them; then the error.
+        stopped = e;
       }
       if (batch.count > 0) {
         count += batch.count;
         yield batch;
         batch.count = 0;
       }
+      if (stopped !== null) throw stopped;
       if (count === 0) throw new CliError(`${file}: the case table has no result rows below its header row`);
     } finally {
       await source.close();
