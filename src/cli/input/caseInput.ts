@@ -1,8 +1,8 @@
 /**
  * A case file (CSV or JSON) opened for one ruleset. A cases-as-columns CSV —
  * an analysis export, possibly a million result rows — is streamed: its header
- * row is read once and its result rows come one at a time, so memory stays
- * flat. Everything else (cases-as-rows tables, JSON files) is small and read
+ * row is read once and its result rows come a block at a time, their values
+ * read from the file's bytes, so memory stays flat. Everything else (cases-as-rows tables, JSON files) is small and read
  * whole by the core's readCaseTable.
  */
 import {
@@ -144,12 +144,16 @@ function lastNonBlank(cells: Cell[]): number {
 
 /** Every record as wide as the header row: a ragged file is refused with the line that differs. */
 function checkWidth(file: string, record: CsvRecord, header: CsvRecord): void {
+  if (record.cells.length === header.cells.length || record.cells.every(isBlank)) return;
+  throw widthError(file, record.cells.length, record.line, header);
+}
+
+/** A row of `fields` fields at `line` where the header row has another width. */
+function widthError(file: string, fields: number, line: number, header: CsvRecord): CliError {
   const width = header.cells.length;
-  if (record.cells.length === width || record.cells.every(isBlank)) return;
-  const n = record.cells.length;
-  const where = n < width ? `column ${columnLetters(n)}` : `column ${columnLetters(width)}`;
-  throw new CliError(
-    `${file} line ${record.line}, ${where}: the row has ${n} field${n === 1 ? "" : "s"} where the header row (line ${header.line}) has ${width}; every row of a case table has the header row's width`,
+  const where = fields < width ? `column ${columnLetters(fields)}` : `column ${columnLetters(width)}`;
+  return new CliError(
+    `${file} line ${line}, ${where}: the row has ${fields} field${fields === 1 ? "" : "s"} where the header row (line ${header.line}) has ${width}; every row of a case table has the header row's width`,
   );
 }
 
@@ -218,12 +222,6 @@ function caseStream(
   const batch: RowBatch = { count: 0, ids: new Array<string>(BATCH_ROWS), values: new Float64Array(BATCH_ROWS * caseCount), lines: new Int32Array(BATCH_ROWS) };
   const problems: Problem[] = [];
 
-  const refuseWidth = (fields: number, line: number) => {
-    const where = fields < width ? `column ${columnLetters(fields)}` : `column ${columnLetters(width)}`;
-    return new CliError(
-      `${file} line ${line}, ${where}: the row has ${fields} field${fields === 1 ? "" : "s"} where the header row (line ${header.line}) has ${width}; every row of a case table has the header row's width`,
-    );
-  };
   const refuseUnnamed = (column: number, line: number) =>
     new CliError(`${file} line ${line}, column ${columnLetters(column)}: a value in a column whose header is blank; name the case in the header row or clear the column`);
 
@@ -232,7 +230,7 @@ function caseStream(
     const row = nextRow++;
     lines.note(row, record.line);
     if (record.cells.every(isBlank)) return;
-    if (record.cells.length !== width) throw refuseWidth(record.cells.length, record.line);
+    if (record.cells.length !== width) throw widthError(file, record.cells.length, record.line, header);
     const read = rowReader.read(record.cells, row);
     for (let c = named; c < width; c++) if (!isBlank(record.cells[c])) throw refuseUnnamed(c, record.line);
     if (!read.ok) throw problemsInFile(file, read.problems, at);
@@ -255,7 +253,7 @@ function caseStream(
     const scanner = source.scanner;
     const fields = scanner.fieldCount;
     if (allBlank(source)) return;
-    if (fields !== width) throw refuseWidth(fields, line);
+    if (fields !== width) throw widthError(file, fields, line, header);
     const idCells: string[] = [];
     for (let c = 0; c < idColumns; c++) idCells.push(source.text(c));
     const id = rowReader.idOf(idCells, row);
