@@ -21,6 +21,8 @@ export interface ResultBatch {
   cases: number;
   ids: readonly string[];
   values: Float64Array;
+  /** File line of each row, where the rows come from a streamed file. */
+  lines: Int32Array | null;
   where(n: number): string;
 }
 
@@ -29,14 +31,14 @@ export async function* resultBatches(input: CaseInput, label: string): AsyncGene
     const { components, values, cases } = input.table;
     const flat = new Float64Array(components.length * cases.length);
     values.forEach((v, c) => flat.set(v, c * cases.length));
-    yield { count: components.length, cases: cases.length, ids: components, values: flat, where: (n) => `(${components[n]})` };
+    yield { count: components.length, cases: cases.length, ids: components, values: flat, lines: null, where: (n) => `(${components[n]})` };
     return;
   }
   const progress = progressBar(input.totalBytes, label);
   try {
     for await (const batch of input.batches) {
       progress.update(input.bytesRead());
-      yield { count: batch.count, cases: input.cases.length, ids: batch.ids, values: batch.values, where: (n) => `line ${batch.lines[n]} (${batch.ids[n]})` };
+      yield { count: batch.count, cases: input.cases.length, ids: batch.ids, values: batch.values, lines: batch.lines, where: (n) => `line ${batch.lines[n]} (${batch.ids[n]})` };
     }
   } finally {
     progress.stop();
