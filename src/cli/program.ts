@@ -93,7 +93,7 @@ export function buildProgram(io: Io): Command {
         .command("envelope")
         .description("per result, the largest and smallest value over every concrete row, with the row that gives each")
         .argument("<file>", "case file (CSV or JSON)")
-        .option("--threads <n>", "1, 2 or auto: with auto, a streamed CSV file of 64 MB or more is read on one core and evaluated on another (csv output)", "auto"),
+        .option("--threads <n>", "1, 2 or auto: with auto, a streamed CSV file of 64 MB or more is read on one core and evaluated on another where a core is free (csv output)", "auto"),
     ),
   )
     .addHelpText(

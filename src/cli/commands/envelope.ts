@@ -1,5 +1,5 @@
 /** `loadwright envelope FILE`: per component or result row, the largest and smallest value with the row that gives each. */
-import { availableParallelism } from "node:os";
+import { availableParallelism, loadavg } from "node:os";
 import { compiledPlanOf, extremesEvaluator, labelOf } from "../../core/index.js";
 import { CliError } from "../cliError.js";
 import { parameterInput } from "../input/paramOption.js";
@@ -25,7 +25,7 @@ export async function envelopeCommand(file: string, options: EnvelopeOptions, io
   await writePreamble(io, prepared);
   const { out } = io;
   if (format === "csv" && input.kind === "stream") {
-    const two = threads === 2 || (threads === "auto" && input.totalBytes >= TWO_THREADS_FROM_BYTES && availableParallelism() >= 2);
+    const two = threads === 2 || (threads === "auto" && input.totalBytes >= TWO_THREADS_FROM_BYTES && coreToSpare());
     if (two) return envelopeOnTwoThreads(file, input, chosen.ruleset, parameterInput(options.param), io);
   }
   const compiled = compiledPlanOf(plan);
@@ -90,7 +90,17 @@ export async function envelopeCommand(file: string, options: EnvelopeOptions, io
   if (done) await writer.end();
 }
 
-/** --threads: 1, 2, or auto (two for a streamed CSV output of a large file, where there are two cores). */
+/**
+ * Whether a second core is likely free: the machine has two or more and the
+ * last minute's load leaves one. On a busy machine a second thread only adds
+ * work (passing blocks between threads) and memory (a second heap).
+ */
+function coreToSpare(): boolean {
+  const cores = availableParallelism();
+  return cores >= 2 && loadavg()[0] <= cores - 1.5;
+}
+
+/** --threads: 1, 2, or auto (two for a streamed CSV output of a large file, where a core is free). */
 function threadsOf(option: string): 1 | 2 | "auto" {
   const v = option.trim().toLowerCase();
   if (v === "1") return 1;

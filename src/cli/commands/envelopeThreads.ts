@@ -13,7 +13,7 @@ import type { EnvelopeBlock, EnvelopeLines, EnvelopeWorkerSetup } from "./envelo
 import { resultBatches } from "./results.js";
 
 /** Blocks handed over and not yet written: enough to keep both threads busy, few enough to keep memory flat. */
-const IN_FLIGHT = 4;
+const IN_FLIGHT = 2;
 
 interface Sent {
   lines: Promise<EnvelopeLines>;
@@ -30,7 +30,8 @@ export async function envelopeOnTwoThreads(file: string, input: CaseStream, rule
     modes: [...input.map.modes],
     reversible: [...input.map.reversible],
   };
-  const worker = new Worker(new URL("./envelopeWorker.js", import.meta.url), { workerData: setup });
+  // A small young generation: the worker keeps nothing between blocks, and memory must stay flat.
+  const worker = new Worker(new URL("./envelopeWorker.js", import.meta.url), { workerData: setup, resourceLimits: { maxYoungGenerationSizeMb: 8 } });
   const waiting = new Map<number, { resolve: (lines: EnvelopeLines) => void; reject: (e: unknown) => void }>();
   const failAll = (e: unknown) => {
     for (const w of waiting.values()) w.reject(e);
