@@ -109,7 +109,15 @@ export function buildProgram(io: Io) {
     .addHelpText("after", `\nExamples:\n  loadwright factored reactions.csv --ruleset my-rules.json\n  loadwright factored reactions.csv -r my-rules.json --format json > factored.json\n${CASE_FILE_HELP}\n${CAUTION_HELP}`)
     .action((file, options) => factoredCommand(file, options, io));
 
-  caseOptions(rulesetOptions(program.command("envelope").description("per result, the largest and smallest value over every concrete row, with the row that gives each").argument("<file>", "case file (CSV or JSON)")))
+  caseOptions(
+    rulesetOptions(
+      program
+        .command("envelope")
+        .description("per result, the largest and smallest value over every concrete row, with the row that gives each")
+        .argument("<file>", "case file (CSV or JSON)")
+        .option("--threads <n>", "1, 2 or auto: with auto, a streamed CSV file of 64 MB or more is read on one core and evaluated on another where a core is free (csv output)", "auto"),
+    ),
+  )
     .addHelpText(
       "after",
       `\nExamples:\n  loadwright envelope export.csv --ruleset my-rules.json\n  loadwright envelope export.csv -r my-rules.json --id-columns 3 --format csv > envelope.csv\n${CASE_FILE_HELP}\n${CAUTION_HELP}`,

@@ -22,6 +22,7 @@ export {
 export { loadRuleset } from "./ruleset/loadRuleset.js";
 export { duplicateKeys, jsonSyntaxError, type DuplicateKey } from "./ruleset/jsonSyntax.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
+export { typedRuleset, clearTypedRulesets, TYPED_RULESET_LIMIT, type TypedRuleset } from "./ruleset/typedRulesets.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
 export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";
 export { rulesetStatus, combinationCoverage, type RulesetStatus, type CombinationCoverage, type Verification, type Approval } from "./ruleset/status.js";
@@ -51,8 +52,10 @@ export { parseParameterText, parameterPairs, type ParameterInput } from "./param
 export { resolveParameters, type ParameterValues } from "./params/resolveParameters.js";
 
 // Case tables
-export { readCaseTable, readValue, type CaseTable, type CaseTableOptions, type Orientation } from "./cases/readCaseTable.js";
-export { readCaseHeaders, readCaseMap, symbolOfHeader, EMPTY_CASE_MAP, type CaseMap, type LoadCase } from "./cases/caseHeaders.js";
+export { readCaseTable, type CaseTable, type CaseTableOptions, type Orientation } from "./cases/readCaseTable.js";
+export { readValue, type ValueOptions } from "./cases/readValue.js";
+export { resultRowReader, type ResultRow, type ResultRowOptions, type ResultRowReader } from "./cases/resultRows.js";
+export { namesLoadSymbol, readCaseHeaders, readCaseMap, symbolOfHeader, EMPTY_CASE_MAP, type CaseMap, type LoadCase } from "./cases/caseHeaders.js";
 
 // Planning
 export { planCombinations, MAX_BRANCHES, type PlanInput } from "./plan/planCombinations.js";
@@ -61,14 +64,16 @@ export type { Plan, PlanCase, PlannedCombination, RowRef } from "./plan/types.js
 
 // Evaluation
 export { envelope, envelopeOf, type EnvelopeEntry, type EnvelopeValue } from "./evaluate/envelope.js";
-export { extremes, type Extreme, type Extremes } from "./evaluate/extremes.js";
+export { extremes, extremesEvaluator, type Extreme, type Extremes, type ExtremesEvaluator, type RowExtremes } from "./evaluate/extremes.js";
+export { compiledPlanOf, type CompiledPlan } from "./plan/compiledPlan.js";
 export { governing, defaultCriteria, type GoverningRow, type GoverningOptions } from "./evaluate/governing.js";
 export { parseCriterion, type Criterion } from "./evaluate/criteria.js";
 export { factored, type FactoredRow } from "./evaluate/factored.js";
 export { comboRows, type ComboRow } from "./evaluate/combos.js";
 export { explain, findRow, type Explanation, type ExplanationLine } from "./evaluate/explain.js";
-export { DEFAULT_ROW_LIMIT, enumerateRows, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
+export { DEFAULT_ROW_LIMIT, enumerateRows, labelOf, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
 export { planForTable } from "./planForTable.js";
+export { cachedPlanForTable, cachedPlanCount, clearPlanCache, PLAN_CACHE_LIMIT } from "./plan/planCache.js";
 
 // What every surface says (one vocabulary)
 export { statusText, approvalWords, approvedByText, VERIFICATION_WORDS, type ApprovalRecord, type ApprovalWords, type StatusText } from "./text/statusText.js";

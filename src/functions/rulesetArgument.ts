@@ -2,7 +2,7 @@
  * The ruleset argument: the id of a ruleset stored in the workbook or shipped
  * with Loadwright, or a range of [id, expression, clause] rows typed in cells.
  */
-import { didYouMean, nearest, problem, RULESET_ID_PATTERN, rulesetFromRows, rulesetStatus, type Cell, type Place, type ProblemKind, type Result } from "../core/index.js";
+import { didYouMean, nearest, problem, RULESET_ID_PATTERN, typedRuleset, type Cell, type Place, type ProblemKind, type Result } from "../core/index.js";
 import type { RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import { asMatrix, blankZeroRows, isEmptyArgument } from "./excelCells.js";
 import type { ResolvedRuleset } from "./formula.js";
@@ -54,15 +54,15 @@ function byId(id: string, library: RulesetLibrary): Result<ResolvedRuleset> {
 }
 
 function typed(rows: Cell[][]): Result<ResolvedRuleset> {
-  const loaded = rulesetFromRows(rows);
+  const loaded = typedRuleset(rows);
   if (!loaded.ok) return loaded;
-  const ruleset = loaded.value;
+  const { ruleset, status } = loaded.value;
   const width = Math.max(0, ...rows.map((r) => r.length));
   return {
     ok: true,
     value: {
       ruleset,
-      status: rulesetStatus(ruleset),
+      status,
       source: "cells",
       shippedFingerprint: null,
       entryRows: new Map(ruleset.combinations.map((c) => [c.id, c.sourceRow ?? 0])),

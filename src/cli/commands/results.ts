@@ -10,17 +10,35 @@ export interface Result {
 }
 
 export async function* resultsOf(input: CaseInput, label: string): AsyncGenerator<Result> {
+  for await (const batch of resultBatches(input, label)) {
+    for (let n = 0; n < batch.count; n++) yield { id: batch.ids[n], values: batch.values.slice(n * batch.cases, (n + 1) * batch.cases), where: batch.where(n) };
+  }
+}
+
+/** Result rows a block at a time: values row after row, `cases` to a row. Read a batch before asking for the next. */
+export interface ResultBatch {
+  count: number;
+  cases: number;
+  ids: readonly string[];
+  values: Float64Array;
+  /** File line of each row, where the rows come from a streamed file. */
+  lines: Int32Array | null;
+  where(n: number): string;
+}
+
+export async function* resultBatches(input: CaseInput, label: string): AsyncGenerator<ResultBatch> {
   if (input.kind === "table") {
-    const { components, values } = input.table;
-    for (let c = 0; c < components.length; c++) yield { id: components[c], values: values[c], where: `(${components[c]})` };
+    const { components, values, cases } = input.table;
+    const flat = new Float64Array(components.length * cases.length);
+    values.forEach((v, c) => flat.set(v, c * cases.length));
+    yield { count: components.length, cases: cases.length, ids: components, values: flat, lines: null, where: (n) => `(${components[n]})` };
     return;
   }
   const progress = progressBar(input.totalBytes, label);
-  let n = 0;
   try {
-    for await (const row of input.rows) {
-      if (++n % 2048 === 0) progress.update(input.bytesRead());
-      yield { id: row.id, values: row.values, where: `line ${row.line} (${row.id})` };
+    for await (const batch of input.batches) {
+      progress.update(input.bytesRead());
+      yield { count: batch.count, cases: input.cases.length, ids: batch.ids, values: batch.values, lines: batch.lines, where: (n) => `line ${batch.lines[n]} (${batch.ids[n]})` };
     }
   } finally {
     progress.stop();

@@ -1,8 +1,8 @@
 /**
  * A case file (CSV or JSON) opened for one ruleset. A cases-as-columns CSV —
  * an analysis export, possibly a million result rows — is streamed: its header
- * row is read once and its result rows come one at a time, so memory stays
- * flat. Everything else (cases-as-rows tables, JSON files) is small and read
+ * row is read once and its result rows come a block at a time, their values
+ * read from the file's bytes, so memory stays flat. Everything else (cases-as-rows tables, JSON files) is small and read
  * whole by the core's readCaseTable.
  */
 import {
@@ -12,7 +12,8 @@ import {
   readCaseHeaders,
   readCaseTable,
   readValue,
-  symbolOfHeader,
+  namesLoadSymbol,
+  resultRowReader,
   type CaseMap,
   type CaseTable,
   type Cell,
@@ -22,7 +23,9 @@ import {
   type Ruleset,
 } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
-import { readCsv, type CsvReader, type CsvRecord } from "./csvRecords.js";
+import type { CsvRecord } from "./csvRecords.js";
+import { decimalAt } from "./csvScanner.js";
+import { CsvSource } from "./csvSource.js";
 import { checkReadable, readText } from "./fileAccess.js";
 import { offsetOfPath, positionOf, syntaxErrorOffset } from "./jsonLocation.js";
 import { csvLocator, describeInFile, type CellLocator } from "./locate.js";
@@ -35,6 +38,17 @@ export interface CaseFileOptions {
   idColumns: number;
   delimiter: string;
   map: CaseMap;
+  /** How records are found: in the file's bytes ("bytes", the default), or by csv-parse alone (the general reader the scanner is held to). */
+  reader?: "bytes" | "csv-parse";
+}
+
+/** Result rows of a cases-as-columns file, a batch at a time; the batch is reused, so read it before asking for the next. */
+export interface RowBatch {
+  count: number;
+  ids: string[];
+  /** count × cases values, row after row, in the order of `cases`. */
+  values: Float64Array;
+  lines: Int32Array;
 }
 
 /** One result row of a cases-as-columns file. */
@@ -52,6 +66,8 @@ export interface CaseStream {
   map: CaseMap;
   /** The header row as written, for naming columns. */
   idHeaders: string[];
+  /** The result rows in batches (fast), or one at a time (`rows`); use one of the two, once. */
+  batches: AsyncGenerator<RowBatch>;
   rows: AsyncGenerator<ResultRow>;
   totalBytes: number;
   bytesRead(): number;
@@ -76,41 +92,48 @@ export function tableShape(input: CaseInput): CaseTable {
 export async function openCases(file: string, ruleset: Ruleset, options: CaseFileOptions): Promise<CaseInput> {
   if (/\.json$/i.test(file)) return openJsonCases(file, ruleset, options);
   const totalBytes = checkReadable(file, "case file");
-  const reader = readCsv(file, { delimiter: options.delimiter });
-  const first = await firstRecord(reader);
+  const source = await CsvSource.open(file, options.delimiter, options.reader ?? "bytes");
+  const first = await firstRecord(source);
   if (!first) throw new CliError(`${file}: the file is empty; a case file starts with a header row (docs/case-tables.md)`);
   const lastNamed = lastNonBlank(first.cells);
-  const reads = (cell: Cell) => !("error" in symbolOfHeader(cellText(cell), ruleset, options.map));
+  const reads = (cell: Cell) => namesLoadSymbol(cellText(cell), ruleset, options.map);
 
   const headerCells = first.cells.slice(options.idColumns, lastNamed + 1);
   const headerReaders = headerCells.filter(reads).length;
   const buffered: CsvRecord[] = [];
   const whole = async (): Promise<CaseFile> => {
-    for await (const record of reader.records) buffered.push(record);
+    for (let record = await nextRecord(source); record; record = await nextRecord(source)) buffered.push(record);
     return wholeTable(file, [first, ...buffered], ruleset, options, reads);
   };
   if (options.layout === "rows" || (options.layout === "auto" && headerReaders === 0)) return whole();
   if (options.layout === "auto") {
     // Cases as columns if the header row names cases and the first result row's id does not read as one.
     for (;;) {
-      const next = await reader.records.next();
-      if (next.done) return wholeTable(file, [first, ...buffered], ruleset, options, reads);
-      buffered.push(next.value);
-      const firstCell = next.value.cells[0];
+      const next = await nextRecord(source);
+      if (!next) return wholeTable(file, [first, ...buffered], ruleset, options, reads);
+      buffered.push(next);
+      const firstCell = next.cells[0];
       if (isBlank(firstCell)) continue;
       if (reads(firstCell)) return whole();
       break;
     }
   }
-  return caseStream(file, first, buffered, reader, ruleset, options, totalBytes);
+  return caseStream(file, first, buffered, source, ruleset, options, totalBytes);
 }
 
-async function firstRecord(reader: CsvReader): Promise<CsvRecord | null> {
+/** The next record as cells, or null at the end of the file. */
+async function nextRecord(source: CsvSource): Promise<CsvRecord | null> {
   for (;;) {
-    const next = await reader.records.next();
-    if (next.done) return null;
-    if (!next.value.cells.every(isBlank)) return next.value;
+    const step = source.next();
+    if (step === "record") return source.record();
+    if (step === "end") return null;
+    await source.refill();
   }
+}
+
+async function firstRecord(source: CsvSource): Promise<CsvRecord | null> {
+  for (let record = await nextRecord(source); record; record = await nextRecord(source)) if (!record.cells.every(isBlank)) return record;
+  return null;
 }
 
 function lastNonBlank(cells: Cell[]): number {
@@ -121,12 +144,16 @@ function lastNonBlank(cells: Cell[]): number {
 
 /** Every record as wide as the header row: a ragged file is refused with the line that differs. */
 function checkWidth(file: string, record: CsvRecord, header: CsvRecord): void {
+  if (record.cells.length === header.cells.length || record.cells.every(isBlank)) return;
+  throw widthError(file, record.cells.length, record.line, header);
+}
+
+/** A row of `fields` fields at `line` where the header row has another width. */
+function widthError(file: string, fields: number, line: number, header: CsvRecord): CliError {
   const width = header.cells.length;
-  if (record.cells.length === width || record.cells.every(isBlank)) return;
-  const n = record.cells.length;
-  const where = n < width ? `column ${columnLetters(n)}` : `column ${columnLetters(width)}`;
-  throw new CliError(
-    `${file} line ${record.line}, ${where}: the row has ${n} field${n === 1 ? "" : "s"} where the header row (line ${header.line}) has ${width}; every row of a case table has the header row's width`,
+  const where = fields < width ? `column ${columnLetters(fields)}` : `column ${columnLetters(width)}`;
+  return new CliError(
+    `${file} line ${line}, ${where}: the row has ${fields} field${fields === 1 ? "" : "s"} where the header row (line ${header.line}) has ${width}; every row of a case table has the header row's width`,
   );
 }
 
@@ -165,7 +192,7 @@ function caseStream(
   file: string,
   header: CsvRecord,
   buffered: CsvRecord[],
-  reader: CsvReader,
+  source: CsvSource,
   ruleset: Ruleset,
   options: CaseFileOptions,
   totalBytes: number,
@@ -173,61 +200,123 @@ function caseStream(
   const width = header.cells.length;
   const named = lastNonBlank(header.cells) + 1;
   const idColumns = options.idColumns;
-  const at = csvLocator((row) => row + 1);
   if (named <= idColumns) {
     throw new CliError(`${file} line ${header.line}: the header row names no load case after the ${idColumns} result-id column${idColumns === 1 ? "" : "s"}`);
   }
   const headers = readCaseHeaders(header.cells.slice(idColumns, named), ruleset, options.map, (i) => ({ row: header.line - 1, column: i + idColumns }));
   if (!headers.ok) {
-    const error = problemsInFile(file, headers.problems, at);
+    const error = problemsInFile(file, headers.problems, csvLocator((row) => row + 1));
     // "station" right after the id column of "member,station,D,L": more columns name a result row.
     const firstUnknown = headers.problems.find((p) => p.kind === "cases-unknown-symbol" && p.place.column === idColumns);
     if (firstUnknown) error.more.push(`if column ${columnLetters(idColumns)} is part of each result row's name, say how many columns name a row: --id-columns ${idColumns + 1}`);
     throw error;
   }
   const cases = headers.value;
-  const valueOptions = { numbersAsText: true };
+  const caseCount = cases.length;
+  const rowReader = resultRowReader(cases, { idColumns, numbersAsText: true });
+  // Rows are counted from the header row (row 0), as the whole-table reader counts them; lines are the file's.
+  const lines = lineBook(header.line);
+  const at = csvLocator((row) => lines.lineOf(row));
+  let nextRow = 1;
+
+  const batch: RowBatch = { count: 0, ids: new Array<string>(BATCH_ROWS), values: new Float64Array(BATCH_ROWS * caseCount), lines: new Int32Array(BATCH_ROWS) };
+  const problems: Problem[] = [];
+
+  const refuseUnnamed = (column: number, line: number) =>
+    new CliError(`${file} line ${line}, column ${columnLetters(column)}: a value in a column whose header is blank; name the case in the header row or clear the column`);
+
+  /** A record given as cells (read while the layout was decided, or by csv-parse): the core reads it whole. */
+  const addCells = (record: CsvRecord): void => {
+    const row = nextRow++;
+    lines.note(row, record.line);
+    if (record.cells.every(isBlank)) return;
+    if (record.cells.length !== width) throw widthError(file, record.cells.length, record.line, header);
+    const read = rowReader.read(record.cells, row);
+    for (let c = named; c < width; c++) if (!isBlank(record.cells[c])) throw refuseUnnamed(c, record.line);
+    if (!read.ok) throw problemsInFile(file, read.problems, at);
+    if (!read.value) return;
+    const n = batch.count++;
+    batch.ids[n] = read.value.id;
+    batch.values.set(read.value.values, n * caseCount);
+    batch.lines[n] = record.line;
+  };
+
+  /**
+   * A record in the scanner's fields: the same reading as the core's, with each
+   * value read from its bytes where it is a plain decimal number, and by the
+   * core's readValue from its text otherwise (blanks, spaces, text: its words).
+   */
+  const addScanned = (): void => {
+    const row = nextRow++;
+    const line = source.line;
+    lines.note(row, line);
+    const scanner = source.scanner;
+    const fields = scanner.fieldCount;
+    if (allBlank(source)) return;
+    if (fields !== width) throw widthError(file, fields, line, header);
+    const idCells: string[] = [];
+    for (let c = 0; c < idColumns; c++) idCells.push(source.text(c));
+    const id = rowReader.idOf(idCells, row);
+    problems.length = 0;
+    const repeated = rowReader.claim(id, row);
+    if (repeated) problems.push(repeated);
+    const n = batch.count;
+    const base = n * caseCount;
+    const { buf, fieldStart, fieldEnd } = scanner;
+    for (let k = 0; k < caseCount; k++) {
+      const c = k + idColumns;
+      let v = decimalAt(buf, fieldStart[c], fieldEnd[c]);
+      if (v !== v) v = readValue(source.text(c), { row, column: c }, cases[k].header, VALUE_OPTIONS, problems);
+      batch.values[base + k] = v;
+    }
+    for (let c = named; c < width; c++) if (!fieldBlank(source, c)) throw refuseUnnamed(c, line);
+    if (problems.length > 0) throw problemsInFile(file, problems, at);
+    batch.count = n + 1;
+    batch.ids[n] = id;
+    batch.lines[n] = line;
+  };
+
+  async function* batches(): AsyncGenerator<RowBatch> {
+    let count = 0;
+    let stopped: unknown = null;
+    try {
+      try {
+        for (const record of buffered) addCells(record);
+        for (;;) {
+          const step = source.next();
+          if (step === "record") {
+            if (source.fromBytes) addScanned();
+            else addCells(source.record());
+            if (batch.count === BATCH_ROWS) {
+              count += batch.count;
+              yield batch;
+              batch.count = 0;
+            }
+            continue;
+          }
+          if (step === "end") break;
+          await source.refill();
+        }
+      } catch (e) {
+        // The rows before a bad one are given first, as a row-by-row reader gives them; then the error.
+        stopped = e;
+      }
+      if (batch.count > 0) {
+        count += batch.count;
+        yield batch;
+        batch.count = 0;
+      }
+      if (stopped !== null) throw stopped;
+      if (count === 0) throw new CliError(`${file}: the case table has no result rows below its header row`);
+    } finally {
+      await source.close();
+    }
+  }
 
   async function* rows(): AsyncGenerator<ResultRow> {
-    let count = 0;
-    const toRow = (record: CsvRecord): ResultRow | null => {
-      if (record.cells.every(isBlank)) return null;
-      checkWidth(file, record, header);
-      const problems: Problem[] = [];
-      const row = record.line - 1;
-      const id =
-        record.cells
-          .slice(0, idColumns)
-          .map(cellText)
-          .filter((t) => t !== "")
-          .join(" / ") || `line ${record.line}`;
-      const values = new Float64Array(cases.length);
-      for (let k = 0; k < cases.length; k++) {
-        values[k] = readValue(record.cells[k + idColumns], { row, column: k + idColumns }, cases[k].header, valueOptions, problems);
-      }
-      for (let c = named; c < width; c++) {
-        if (!isBlank(record.cells[c])) {
-          throw new CliError(`${file} line ${record.line}, column ${columnLetters(c)}: a value in a column whose header is blank; name the case in the header row or clear the column`);
-        }
-      }
-      if (problems.length > 0) throw problemsInFile(file, problems, at);
-      return { id, values, line: record.line };
-    };
-    for (const record of buffered) {
-      const row = toRow(record);
-      if (row) {
-        count++;
-        yield row;
-      }
+    for await (const b of batches()) {
+      for (let n = 0; n < b.count; n++) yield { id: b.ids[n], values: b.values.slice(n * caseCount, (n + 1) * caseCount), line: b.lines[n] };
     }
-    for await (const record of reader.records) {
-      const row = toRow(record);
-      if (row) {
-        count++;
-        yield row;
-      }
-    }
-    if (count === 0) throw new CliError(`${file}: the case table has no result rows below its header row`);
   }
 
   return {
@@ -236,13 +325,33 @@ function caseStream(
     cases,
     map: options.map,
     idHeaders: header.cells.slice(0, idColumns).map(cellText),
+    batches: batches(),
     rows: rows(),
     totalBytes,
-    bytesRead: reader.bytesRead,
-    close: async () => {
-      await reader.records.return(undefined);
-    },
+    bytesRead: () => source.bytesRead(),
+    close: () => source.close(),
   };
+}
+
+/** Result rows handed over at a time: enough to make the cost per batch negligible, few enough to stay small. */
+const BATCH_ROWS = 1024;
+const VALUE_OPTIONS = { numbersAsText: true };
+
+/** A field is blank as the core's isBlank says: nothing but white space. */
+function fieldBlank(source: CsvSource, k: number): boolean {
+  const { buf, fieldStart, fieldEnd } = source.scanner;
+  for (let p = fieldStart[k]; p < fieldEnd[k]; p++) {
+    const b = buf[p];
+    if (b === 0x20 || (b >= 0x09 && b <= 0x0d)) continue;
+    // Other white space (no-break space, …) is not ASCII: the text decides.
+    return b < 0x80 ? false : isBlank(source.text(k));
+  }
+  return true;
+}
+
+function allBlank(source: CsvSource): boolean {
+  for (let k = 0; k < source.scanner.fieldCount; k++) if (!fieldBlank(source, k)) return false;
+  return true;
 }
 
 function openJsonCases(file: string, ruleset: Ruleset, options: CaseFileOptions): CaseFile {
@@ -292,4 +401,33 @@ export function jsonErrorMessage(e: unknown): string {
     .replace(/\s*\(line \d+ column \d+\)/, "")
     .replace(/ in JSON at position \d+/, "")
     .replace(/^(Unexpected token '.'), [\s\S]*$/, "$1");
+}
+
+/**
+ * Which file line each table row (counted from the header row) starts on,
+ * for rows already read: kept as the points where a row's line stops being
+ * the previous row's line + 1 (a quoted field over several lines), so memory
+ * stays flat for a file of a million rows.
+ */
+function lineBook(headerLine: number): { note(row: number, line: number): void; lineOf(row: number): number } {
+  const rows: number[] = [0];
+  const offsets: number[] = [headerLine];
+  return {
+    note(row, line) {
+      if (line - row !== offsets[offsets.length - 1]) {
+        rows.push(row);
+        offsets.push(line - row);
+      }
+    },
+    lineOf(row) {
+      let lo = 0;
+      let hi = rows.length - 1;
+      while (lo < hi) {
+        const mid = (lo + hi + 1) >> 1;
+        if (rows[mid] <= row) lo = mid;
+        else hi = mid - 1;
+      }
+      return row + offsets[lo];
+    },
+  };
 }

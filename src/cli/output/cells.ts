@@ -4,11 +4,66 @@ import { formatNumber } from "../../core/index.js";
 /** 12 significant digits (168, not 168.00000000000003); never "-0". JSON keeps full precision. */
 export function numberText(value: number): string {
   if (value === 0) return "0";
+  const short = fourDecimalText(value);
+  if (short !== null) return short;
   // Fast path for a streamed million rows: a number whose shortest form has at most 12 characters
   // (and no exponent) has at most 12 significant digits, which is what formatNumber would write.
   const plain = String(value);
   if (plain.length <= 12 && !plain.includes("e")) return plain;
-  return formatNumber(value);
+  return roundedText(value) ?? formatNumber(value);
+}
+
+/**
+ * The text of a value that is the double nearest a decimal with at most four
+ * decimals and |value| < 1e8 (factored two-decimal results often are), written
+ * from integers — null otherwise. Such a decimal is the only one of four
+ * decimals or fewer that reads back as the value (two of them differ by 1e-4,
+ * far more than a double's spacing below 1e8), so it is the value's shortest
+ * form, String(value); and with at most 8 + 4 significant digits it is also
+ * what the 12-digit rule writes.
+ */
+function fourDecimalText(value: number): string | null {
+  const size = Math.abs(value);
+  if (!(size < 1e8)) return null;
+  const scaled = Math.round(size * 1e4);
+  if (scaled / 1e4 !== size) return null;
+  const whole = Math.floor(scaled / 1e4);
+  const fraction = scaled - whole * 1e4;
+  let text = String(whole);
+  if (fraction !== 0) {
+    let digits = String(fraction).padStart(4, "0");
+    while (digits.endsWith("0")) digits = digits.slice(0, -1);
+    text += `.${digits}`;
+  }
+  return value < 0 ? `-${text}` : text;
+}
+
+/** Powers of ten, every one a double exactly. */
+const POWERS = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11];
+
+/**
+ * formatNumber's text for 1 ≤ |value| < 1e11, without toPrecision: with k
+ * decimals to keep 12 significant digits, the digits are n = round(value × 10^k)
+ * — exact where value × 10^k (below 1e12, so off by less than 1e-4) is not
+ * within 0.001 of a half — and n / 10^k, one division of exact doubles, is the
+ * double nearest the 12-digit decimal, as Number(value.toPrecision(12)) is.
+ * Null where that cannot be told this way; the caller then asks formatNumber.
+ */
+function roundedText(value: number): string | null {
+  const size = Math.abs(value);
+  if (!(size >= 1 && size < 1e11)) return null;
+  let exponent = Math.floor(Math.log10(size));
+  // log10 may be off by one next to a power of ten: settle it with the exact powers.
+  if (POWERS[exponent] > size) exponent--;
+  else if (POWERS[exponent + 1] <= size) exponent++;
+  const decimals = 11 - exponent;
+  const scaled = size * POWERS[decimals];
+  const whole = Math.floor(scaled);
+  const fraction = scaled - whole;
+  if (Math.abs(fraction - 0.5) < 1e-3) return null;
+  const digits = fraction > 0.5 ? whole + 1 : whole;
+  const rounded = digits / POWERS[decimals];
+  return String(value < 0 ? -rounded : rounded);
 }
 
 /** A JSON number: full precision, -0 written as 0. */

@@ -29,6 +29,14 @@ export const EMPTY_CASE_MAP: CaseMap = { symbolOf: new Map(), modes: new Map(), 
 const MODES: readonly CaseMode[] = caseModeSchema.options;
 const DIRECTIONS = ["one-way", "both-ways"];
 
+/** Whether a header names a load symbol (as symbolOfHeader reads it), without wording why not: for deciding a table's orientation. */
+export function namesLoadSymbol(header: string, ruleset: Ruleset, map: CaseMap = EMPTY_CASE_MAP): boolean {
+  if (map.symbolOf.has(header)) return true;
+  const colon = header.indexOf(":");
+  if (colon >= 0 && header.slice(colon + 1).trim() === "") return false;
+  return ruleset.symbolByName.has((colon < 0 ? header : header.slice(0, colon)).trim());
+}
+
 /** The symbol a header names, or a problem naming the header and the symbols there are. */
 export function symbolOfHeader(header: string, ruleset: Ruleset, map: CaseMap = EMPTY_CASE_MAP): { symbol: string } | { error: string } {
   const mapped = map.symbolOf.get(header);

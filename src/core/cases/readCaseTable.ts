@@ -11,10 +11,12 @@
  * Internally both become values[component][case], where a "component" is a
  * result row of a cases-as-columns table. Blank value cells read as zero.
  */
-import { cellText, DECIMAL_TEXT, isBlank, type Cell } from "../cells.js";
+import { cellText, isBlank, type Cell } from "../cells.js";
 import { fail, ok, problem, type Problem, type Result } from "../problems.js";
 import type { Ruleset } from "../ruleset/model.js";
-import { EMPTY_CASE_MAP, readCaseHeaders, symbolOfHeader, type CaseMap, type LoadCase } from "./caseHeaders.js";
+import { EMPTY_CASE_MAP, namesLoadSymbol, readCaseHeaders, type CaseMap, type LoadCase } from "./caseHeaders.js";
+import { resultRowReader } from "./resultRows.js";
+import { readValue } from "./readValue.js";
 
 export type Orientation = "rows" | "columns";
 
@@ -75,7 +77,7 @@ function trimBlankEdges(matrix: Cell[][]): Cell[][] {
  * so that one mistyped header is reported by name rather than as "no cases".
  */
 function detectOrientation(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idColumns: number): Result<Orientation> {
-  const share = (cells: Cell[]) => (cells.length === 0 ? 0 : cells.filter((c) => !("error" in symbolOfHeader(cellText(c), ruleset, map))).length / cells.length);
+  const share = (cells: Cell[]) => (cells.length === 0 ? 0 : cells.filter((c) => namesLoadSymbol(cellText(c), ruleset, map)).length / cells.length);
   const firstRow = rows[0].slice(idColumns).filter((c) => !isBlank(c));
   const firstColumn = rows.slice(1).map((r) => r[0]).filter((c) => !isBlank(c));
   const asColumns = share(firstRow);
@@ -118,23 +120,16 @@ function readCasesAsColumns(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idCo
   const headers = readCaseHeaders(rows[0].slice(idColumns), ruleset, map, (i) => ({ row: 0, column: i + idColumns }));
   if (!headers.ok) return headers;
   const cases = headers.value;
+  const reader = resultRowReader(cases, { idColumns, numbersAsText: options.numbersAsText ?? false });
   const components: string[] = [];
   const values: Float64Array[] = [];
-  const firstRowOf = new Map<string, number>();
   for (let r = 1; r < rows.length; r++) {
-    const cells = rows[r];
-    if (cells.every(isBlank)) continue;
-    const id = cells.slice(0, idColumns).map(cellText).filter((t) => t !== "").join(" / ") || `row ${r + 1}`;
-    // A criterion or an explanation names a result by its id: two rows with one id would be ambiguous.
-    const first = firstRowOf.get(id);
-    if (first !== undefined) problems.push(problem("cases-duplicate-header", `result "${id}" appears twice`, { row: r, column: 0, header: id, also: { row: first, column: 0 } }));
-    else firstRowOf.set(id, r);
-    const vector = new Float64Array(cases.length);
-    for (let k = 0; k < cases.length; k++) {
-      vector[k] = readValue(cells[k + idColumns], { row: r, column: k + idColumns }, `${id} / ${cases[k].header}`, options, problems);
+    const row = reader.read(rows[r], r);
+    if (!row.ok) problems.push(...row.problems);
+    else if (row.value) {
+      components.push(row.value.id);
+      values.push(row.value.values);
     }
-    components.push(id);
-    values.push(vector);
   }
   if (problems.length > 0) return fail(...problems);
   if (components.length === 0) return fail(problem("cases-empty", "the case table has no result rows"));
@@ -153,29 +148,4 @@ function componentNames(cells: Cell[], at: (i: number) => { row: number; column:
     names.push(name);
   });
   return names;
-}
-
-/** One value cell: a finite number, or blank (zero). Anything else is a located problem. */
-export function readValue(
-  cell: Cell,
-  place: { row: number; column: number },
-  header: string,
-  options: CaseTableOptions,
-  problems: Problem[],
-): number {
-  if (typeof cell === "number") {
-    if (Number.isFinite(cell)) return cell;
-    problems.push(problem("cases-not-a-number", `${cell} is not a finite number`, { ...place, header }));
-    return 0;
-  }
-  if (isBlank(cell)) return 0;
-  if (typeof cell === "string") {
-    const text = cell.trim();
-    if (options.numbersAsText && DECIMAL_TEXT.test(text)) return Number(text);
-    const hint = /^[+-]?[\d.,]+$/.test(text) ? " (a number stored as text? convert it)" : "";
-    problems.push(problem("cases-not-a-number", `"${text}" is not a number${hint}`, { ...place, header }));
-    return 0;
-  }
-  problems.push(problem("cases-not-a-number", `${String(cell).toUpperCase()} is not a number`, { ...place, header }));
-  return 0;
 }

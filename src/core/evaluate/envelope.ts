@@ -6,8 +6,9 @@
 import type { CaseTable } from "../cases/readCaseTable.js";
 import { fail, ok, type Result } from "../problems.js";
 import type { Plan, RowRef } from "../plan/types.js";
-import { extremes } from "./extremes.js";
-import { noRows, rowLabel } from "./rows.js";
+import { compiledPlanOf, rowRefOf } from "../plan/compiledPlan.js";
+import { sharedEvaluator } from "./extremes.js";
+import { labelOf, noRows } from "./rows.js";
 
 export interface EnvelopeValue {
   value: number;
@@ -32,13 +33,14 @@ export function envelope(plan: Plan, table: CaseTable): Result<EnvelopeEntry[]> 
   return ok(out);
 }
 
-/** One component's envelope from its case values: what a streaming reader calls per result row. */
+/** One component's envelope from its case values. */
 export function envelopeOf(plan: Plan, result: string, x: ArrayLike<number>): EnvelopeEntry | null {
-  const e = extremes(plan, x);
+  const compiled = compiledPlanOf(plan);
+  const e = sharedEvaluator(compiled).evaluate(x);
   if (!e) return null;
   return {
     result,
-    max: { value: e.max.value, row: e.max.row, label: rowLabel(plan, e.max.row) },
-    min: { value: e.min.value, row: e.min.row, label: rowLabel(plan, e.min.row) },
+    max: { value: e.maxValue, row: rowRefOf(compiled, e.maxBranch, e.maxChoices), label: labelOf(compiled, e.maxBranch, e.maxChoices) },
+    min: { value: e.minValue, row: rowRefOf(compiled, e.minBranch, e.minChoices), label: labelOf(compiled, e.minBranch, e.minChoices) },
   };
 }

@@ -10,6 +10,7 @@
 import { rulesetName } from "../ruleset/model.js";
 import type { CaseTable } from "../cases/readCaseTable.js";
 import { fail, ok, problem, type Result } from "../problems.js";
+import { compiledPlanOf, flatBranch, LABEL_CACHE_LIMIT, rowKey, rowRefOf, type CompiledPlan } from "../plan/compiledPlan.js";
 import { formatNumber } from "../plan/factor.js";
 import type { Contribution, Plan, RowRef, TermOption } from "../plan/types.js";
 
@@ -66,15 +67,21 @@ export function rowFactorText(plan: Plan, ref: RowRef): string {
     .join("");
 }
 
-/** Labels per plan, by row: a long export names the same few governing rows again and again. */
-const labelCache = new WeakMap<Plan, Map<string, string>>();
-
+/** A row's label, written once per plan and row (a long export names the same few rows again and again). */
 export function rowLabel(plan: Plan, ref: RowRef): string {
-  let cache = labelCache.get(plan);
-  if (!cache) labelCache.set(plan, (cache = new Map()));
-  const key = `${ref.combination}/${ref.branch}/${ref.choices.join(",")}`;
-  let label = cache.get(key);
-  if (label === undefined) cache.set(key, (label = composeLabel(plan, ref)));
+  const compiled = compiledPlanOf(plan);
+  return labelOf(compiled, flatBranch(compiled, ref), ref.choices);
+}
+
+/** The label of flat branch `branch` with one option per term, from the plan's label cache. */
+export function labelOf(compiled: CompiledPlan, branch: number, choices: ArrayLike<number>): string {
+  const key = rowKey(compiled, branch, choices);
+  let label = compiled.labels.get(key);
+  if (label === undefined) {
+    if (compiled.labels.size >= LABEL_CACHE_LIMIT) compiled.labels.clear();
+    label = composeLabel(compiled.plan, rowRefOf(compiled, branch, choices));
+    compiled.labels.set(key, label);
+  }
   return label;
 }
 

@@ -4,6 +4,7 @@
  * factor written back as text for explanations.
  */
 import type { Arith } from "../expression/ast.js";
+import { fail, ok, problem, type Result } from "../problems.js";
 import type { LoadSymbol } from "../ruleset/model.js";
 
 /** Which option each choice node takes. */
@@ -14,16 +15,6 @@ export interface FactorScope {
   numbers: ReadonlyMap<string, number>;
   /** Parameters without default that were not given: name → description. */
   missing: ReadonlyMap<string, string>;
-}
-
-export class FactorError extends Error {
-  constructor(
-    message: string,
-    readonly position: number,
-    readonly kind: "expression-not-finite" | "parameter-missing" = "expression-not-finite",
-  ) {
-    super(message);
-  }
 }
 
 /** Every choice node of a factor, outermost first. */
@@ -86,33 +77,42 @@ function reachedKey(a: Arith | null, m: ChoiceAssignment): string {
   }
 }
 
-export function evaluateFactor(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope: FactorScope): number {
+/** The factor's value for one symbol; a division by zero, a value that is not finite or a missing parameter is a problem at its character. */
+export function evaluateFactor(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope: FactorScope): Result<number> {
   const value = evaluate(a, choice, symbol, scope);
-  if (!Number.isFinite(value)) throw new FactorError(`the factor on ${symbol.name} is not a finite number (a division by zero?)`, a.span.start);
+  if (value.ok && !Number.isFinite(value.value)) {
+    return fail(problem("expression-not-finite", `the factor on ${symbol.name} is not a finite number (a division by zero?)`, { position: a.span.start }));
+  }
   return value;
 }
 
-function evaluate(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope: FactorScope): number {
+function evaluate(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope: FactorScope): Result<number> {
   switch (a.kind) {
     case "number":
-      return a.value;
+      return ok(a.value);
     case "name":
       return valueOf(a.name, a.span.start, symbol, scope);
-    case "negate":
-      return -evaluate(a.operand, choice, symbol, scope);
+    case "negate": {
+      const operand = evaluate(a.operand, choice, symbol, scope);
+      return operand.ok ? ok(-operand.value) : operand;
+    }
     case "binary": {
-      const l = evaluate(a.left, choice, symbol, scope);
-      const r = evaluate(a.right, choice, symbol, scope);
+      const left = evaluate(a.left, choice, symbol, scope);
+      if (!left.ok) return left;
+      const right = evaluate(a.right, choice, symbol, scope);
+      if (!right.ok) return right;
+      const l = left.value;
+      const r = right.value;
       switch (a.op) {
         case "+":
-          return l + r;
+          return ok(l + r);
         case "-":
-          return l - r;
+          return ok(l - r);
         case "*":
-          return l * r;
+          return ok(l * r);
         case "/":
-          if (r === 0) throw new FactorError(`division by zero in the factor on ${symbol.name}`, a.right.span.start);
-          return l / r;
+          if (r === 0) return fail(problem("expression-not-finite", `division by zero in the factor on ${symbol.name}`, { position: a.right.span.start }));
+          return ok(l / r);
       }
     }
     // falls through: every binary operator returns above
@@ -121,15 +121,15 @@ function evaluate(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope:
   }
 }
 
-function valueOf(name: string, position: number, symbol: LoadSymbol, scope: FactorScope): number {
+function valueOf(name: string, position: number, symbol: LoadSymbol, scope: FactorScope): Result<number> {
   const attribute = symbol.attributes.get(name);
   const valueName = attribute === undefined ? name : attribute;
-  if (typeof valueName === "number") return valueName;
+  if (typeof valueName === "number") return ok(valueName);
   const v = scope.numbers.get(valueName);
-  if (v !== undefined) return v;
+  if (v !== undefined) return ok(v);
   const missing = scope.missing.get(valueName);
-  if (missing !== undefined) throw new FactorError(`parameter ${valueName} has no default; give its value (${missing})`, position, "parameter-missing");
-  throw new FactorError(`"${valueName}" has no value for ${symbol.name}`, position);
+  if (missing !== undefined) return fail(problem("parameter-missing", `parameter ${valueName} has no default; give its value (${missing})`, { position }));
+  return fail(problem("expression-not-finite", `"${valueName}" has no value for ${symbol.name}`, { position }));
 }
 
 /** The factor as a checker reads it, with the chosen option of each choice: "(1.2 + 0.2 × SDS)". */

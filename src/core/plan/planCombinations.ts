@@ -8,14 +8,13 @@
  * branches; within a branch each term keeps its own list of options, so the
  * worst row is found term by term without enumerating the product.
  */
-import type { Body, Sum, Term } from "../expression/ast.js";
+import type { Arith, Body, Sum, Term } from "../expression/ast.js";
 import type { ParameterValues } from "../params/resolveParameters.js";
 import { fail, ok, problem, type Problem, type Result } from "../problems.js";
 import type { CaseMode, Combination, LoadSymbol, Ruleset } from "../ruleset/model.js";
-import { choiceAssignments, evaluateFactor, FactorError, factorText, type ChoiceAssignment } from "./factor.js";
+import { choiceAssignments, evaluateFactor, factorText, type ChoiceAssignment } from "./factor.js";
 import { symbolStates, type SymbolState } from "./symbolStates.js";
 import type { Branch, Contribution, Plan, PlanCase, PlannedCombination, PlannedTerm, TermOption } from "./types.js";
-import type { Arith } from "../expression/ast.js";
 
 /** Shared choices beyond this many branches per combination are refused (the row count would be absurd anyway). */
 export const MAX_BRANCHES = 100_000;
@@ -34,40 +33,15 @@ export function planCombinations(ruleset: Ruleset, parameters: ParameterValues, 
   const cases: PlanCase[] = input.cases ?? ruleset.symbols.map((s) => ({ header: s.name, symbol: s.name }));
   const casesOf = new Map<string, number[]>(ruleset.symbols.map((s) => [s.name, []]));
   cases.forEach((c, i) => casesOf.get(c.symbol)?.push(i));
+  const symbols = symbolAccess(ruleset, parameters, input, casesOf);
 
   const problems: Problem[] = [];
-  const stateCache = new Map<string, SymbolState[]>();
-  const modeOf = (name: string): CaseMode => input.modes?.get(name) ?? (ruleset.symbolByName.get(name) as LoadSymbol).cases;
-  const statesFor = (name: string, cases: number[], mode: CaseMode): SymbolState[] => {
-    const symbol = ruleset.symbolByName.get(name) as LoadSymbol;
-    const share = typeof symbol.orthogonalShare === "number" ? symbol.orthogonalShare : (parameters.numbers.get(symbol.orthogonalShare) ?? NaN);
-    const reversible = input.reversible?.get(name) ?? symbol.reversible;
-    const states = symbolStates(symbol, cases, mode, share, reversible);
-    if (!states.ok) throw new StateLimit(states.problems);
-    return states.value;
-  };
-  const symbols: SymbolAccess = {
-    statesOf: (name) => {
-      let states = stateCache.get(name);
-      if (!states) stateCache.set(name, (states = statesFor(name, casesOf.get(name) ?? [], modeOf(name))));
-      return states;
-    },
-    // One case of an "independent" symbol, as a term of its own.
-    statesOfCase: (name, caseIndex) => statesFor(name, [caseIndex], "sum"),
-    independentCases: (name) => (modeOf(name) === "independent" && (casesOf.get(name)?.length ?? 0) > 1 ? (casesOf.get(name) ?? []) : null),
-  };
-
   const combinations: PlannedCombination[] = [];
   for (const combination of ruleset.combinations) {
-    try {
-      const planned = planOne(combination, ruleset, parameters, symbols, casesOf, supplied, cases);
-      if (!planned.ok) problems.push(...planned.problems);
-      else combinations.push(planned.value);
-    } catch (e) {
-      if (e instanceof StateLimit) problems.push(...e.problems.map((p) => ({ ...p, place: { ...p.place, entry: combination.id } })));
-      else if (e instanceof FactorError) problems.push(problem(e.kind, e.message, { entry: combination.id, position: e.position }));
-      else throw e;
-    }
+    const planned = planOne(combination, ruleset, parameters, symbols, casesOf, supplied, cases);
+    // Whatever went wrong inside a combination (a factor, a symbol's states) belongs to that entry.
+    if (!planned.ok) problems.push(...planned.problems.map((p) => ({ ...p, place: { ...p.place, entry: combination.id } })));
+    else combinations.push(planned.value);
   }
   if (problems.length > 0) return fail(...problems);
   const rowCount = combinations.reduce((n, c) => n + c.rowCount, 0);
@@ -76,22 +50,37 @@ export function planCombinations(ruleset: Ruleset, parameters: ParameterValues, 
 
 /** The ways each symbol can act, computed once per plan. */
 interface SymbolAccess {
-  statesOf: (symbol: string) => SymbolState[];
-  statesOfCase: (symbol: string, caseIndex: number) => SymbolState[];
+  statesOf: (symbol: string) => Result<SymbolState[]>;
+  statesOfCase: (symbol: string, caseIndex: number) => Result<SymbolState[]>;
   /** The cases to give a term each, for a symbol whose cases take their factor options independently; else null. */
   independentCases: (symbol: string) => number[] | null;
 }
 
-class StateLimit extends Error {
-  constructor(readonly problems: Problem[]) {
-    super("state limit");
-  }
+function symbolAccess(ruleset: Ruleset, parameters: ParameterValues, input: PlanInput, casesOf: ReadonlyMap<string, number[]>): SymbolAccess {
+  const cache = new Map<string, Result<SymbolState[]>>();
+  const modeOf = (name: string): CaseMode => input.modes?.get(name) ?? (ruleset.symbolByName.get(name) as LoadSymbol).cases;
+  const statesFor = (name: string, cases: number[], mode: CaseMode): Result<SymbolState[]> => {
+    const symbol = ruleset.symbolByName.get(name) as LoadSymbol;
+    const share = typeof symbol.orthogonalShare === "number" ? symbol.orthogonalShare : (parameters.numbers.get(symbol.orthogonalShare) ?? NaN);
+    const reversible = input.reversible?.get(name) ?? symbol.reversible;
+    return symbolStates(symbol, cases, mode, share, reversible);
+  };
+  return {
+    statesOf: (name) => {
+      let states = cache.get(name);
+      if (!states) cache.set(name, (states = statesFor(name, casesOf.get(name) ?? [], modeOf(name))));
+      return states;
+    },
+    // One case of an "independent" symbol, as a term of its own.
+    statesOfCase: (name, caseIndex) => statesFor(name, [caseIndex], "sum"),
+    independentCases: (name) => (modeOf(name) === "independent" && (casesOf.get(name)?.length ?? 0) > 1 ? (casesOf.get(name) ?? []) : null),
+  };
 }
 
 interface Context {
   ruleset: Ruleset;
   parameters: ParameterValues;
-  statesOf: (symbol: string) => SymbolState[];
+  statesOf: (symbol: string) => Result<SymbolState[]>;
   /** Symbol → the state every occurrence takes in this branch. */
   shared: ReadonlyMap<string, SymbolState>;
   /** Symbol → the states one split-off term of an "independent" symbol may take. */
@@ -104,6 +93,15 @@ interface Context {
 interface StackEntry {
   factor: Arith;
   choice: ChoiceAssignment;
+}
+
+/** What every branch of one combination shares: the combination, its lead(…) list, how often each symbol is written. */
+interface CombinationShape {
+  combination: Combination;
+  leadSymbols: string[];
+  occurrences: ReadonlyMap<string, number>;
+  symbols: SymbolAccess;
+  cases: PlanCase[];
 }
 
 function planOne(
@@ -140,12 +138,20 @@ function planOne(
 
   // Shared choices: the leader, then every symbol written more than once with more than one way to act.
   const occurrences = countOccurrences(sum);
-  const sharedSymbols = [...occurrences].filter(([s, n]) => n > 1 && statesOf(s).length > 1).map(([s]) => s);
+  const sharedSymbols: string[] = [];
+  const sharedStates: SymbolState[][] = [];
+  for (const [s, n] of occurrences) {
+    if (n <= 1) continue;
+    const states = statesOf(s);
+    if (!states.ok) return states;
+    if (states.value.length <= 1) continue;
+    sharedSymbols.push(s);
+    sharedStates.push(states.value);
+  }
   // An action with no case in the table cannot lead; with none of them supplied, nothing leads.
   const suppliedLeaders = leadSymbols.filter((s) => !supplied || hasCases(s));
   const leaders: (string | null)[] = suppliedLeaders.length > 0 ? suppliedLeaders : [null];
-  let branchCount = leaders.length;
-  for (const s of sharedSymbols) branchCount *= statesOf(s).length;
+  const branchCount = sharedStates.reduce((n, states) => n * states.length, leaders.length);
   if (branchCount > MAX_BRANCHES) {
     return fail(
       problem(
@@ -156,46 +162,21 @@ function planOne(
     );
   }
 
+  const shape: CombinationShape = { combination, leadSymbols, occurrences, symbols, cases };
   const branches: Branch[] = [];
   for (const leader of leaders) {
-    for (const sharedStates of product(sharedSymbols.map((s) => statesOf(s)))) {
+    for (const assignment of product(sharedStates)) {
       const ctx: Context = {
         ruleset,
         parameters,
         statesOf,
-        shared: new Map(sharedSymbols.map((s, k) => [s, sharedStates[k]])),
+        shared: new Map(sharedSymbols.map((s, k) => [s, assignment[k]])),
         hasCases: (s) => !supplied || hasCases(s),
         leader,
       };
-      const terms: (PlannedTerm & { leads?: boolean })[] = [];
-      for (const term of sum.terms) {
-        if (term.body.kind === "others") {
-          for (const s of leadSymbols) {
-            if (s === leader) continue;
-            const synthetic: Term = { ...term, body: { kind: "symbol", name: s, span: term.body.span } };
-            terms.push({ text: s, options: termOptions(synthetic, [], ctx, leadSymbols) });
-          }
-          continue;
-        }
-        const split = term.body.kind === "symbol" && occurrences.get(term.body.name) === 1 ? symbols.independentCases(term.body.name) : null;
-        if (split && term.body.kind === "symbol") {
-          const name = term.body.name;
-          for (const k of split) {
-            const own: Context = { ...ctx, only: new Map([[name, symbols.statesOfCase(name, k)]]) };
-            terms.push({ text: `${termText(term, expression)} [${cases[k].header}]`, options: termOptions(term, [], own, leadSymbols) });
-          }
-          continue;
-        }
-        const leads = term.body.kind === "lead";
-        terms.push({ text: leads ? `${leader} (leading)` : termText(term, expression), options: termOptions(term, [], ctx, leadSymbols), leads });
-      }
-      // A term that loads no case in any option (its symbols are not in the table) adds nothing;
-      // the combination's notSupplied list says so once, instead of every label saying "absent".
-      const kept = terms.filter((t) => t.options.some((o) => o.contributions.length > 0));
-      const branch: Branch = { note: leader ? `${leader} leading` : "", terms: kept.map(({ text, options }) => ({ text, options })) };
-      const leaderTerm = kept.findIndex((t) => t.leads);
-      if (leader && leaderTerm >= 0) branch.leader = { symbol: leader, term: leaderTerm };
-      branches.push(branch);
+      const branch = planBranch(shape, ctx);
+      if (!branch.ok) return branch;
+      branches.push(branch.value);
     }
   }
   const rowCount = branches.reduce((n, b) => n + b.terms.reduce((m, t) => m * t.options.length, 1), 0);
@@ -203,15 +184,64 @@ function planOne(
 }
 
 /**
+ * One branch: the combination's terms under one assignment of the shared
+ * choices (the leader, a repeated symbol's way to act). "others" becomes one
+ * term per non-leading action, and an "independent" symbol one term per case.
+ */
+function planBranch(shape: CombinationShape, ctx: Context): Result<Branch> {
+  const { combination, leadSymbols, occurrences, symbols, cases } = shape;
+  const { sum, expression } = combination;
+  const leader = ctx.leader;
+  const terms: (PlannedTerm & { leads: boolean })[] = [];
+  for (const term of sum.terms) {
+    if (term.body.kind === "others") {
+      for (const s of leadSymbols) {
+        if (s === leader) continue;
+        const synthetic: Term = { ...term, body: { kind: "symbol", name: s, span: term.body.span } };
+        const options = termOptions(synthetic, [], ctx, leadSymbols);
+        if (!options.ok) return options;
+        terms.push({ text: s, options: options.value, leads: false });
+      }
+      continue;
+    }
+    const split = term.body.kind === "symbol" && occurrences.get(term.body.name) === 1 ? symbols.independentCases(term.body.name) : null;
+    if (split && term.body.kind === "symbol") {
+      const name = term.body.name;
+      for (const k of split) {
+        const states = symbols.statesOfCase(name, k);
+        if (!states.ok) return states;
+        const options = termOptions(term, [], { ...ctx, only: new Map([[name, states.value]]) }, leadSymbols);
+        if (!options.ok) return options;
+        terms.push({ text: `${termText(term, expression)} [${cases[k].header}]`, options: options.value, leads: false });
+      }
+      continue;
+    }
+    const leads = term.body.kind === "lead";
+    const options = termOptions(term, [], ctx, leadSymbols);
+    if (!options.ok) return options;
+    terms.push({ text: leads ? `${leader} (leading)` : termText(term, expression), options: options.value, leads });
+  }
+  // A term that loads no case in any option (its symbols are not in the table) adds nothing;
+  // the combination's notSupplied list says so once, instead of every label saying "absent".
+  const kept = terms.filter((t) => t.options.some((o) => o.contributions.length > 0));
+  const branch: Branch = { note: leader ? `${leader} leading` : "", terms: kept.map(({ text, options }) => ({ text, options })) };
+  const leaderTerm = kept.findIndex((t) => t.leads);
+  if (leader && leaderTerm >= 0) branch.leader = { symbol: leader, term: leaderTerm };
+  return ok(branch);
+}
+
+/**
  * A term's options. `nested`: the term stands inside an alternative, where it
  * acts whenever its alternative does unless marked "?" — absence by default is
  * decided for the whole top-level term, so "(Lr or S or R)!" never goes empty.
  */
-function termOptions(term: Term, stack: StackEntry[], ctx: Context, leadSymbols: string[], nested = false): TermOption[] {
+function termOptions(term: Term, stack: StackEntry[], ctx: Context, leadSymbols: string[], nested = false): Result<TermOption[]> {
   const options: TermOption[] = [];
   for (const choice of choiceAssignments(term.factor)) {
     const inner = term.factor ? [...stack, { factor: term.factor, choice }] : stack;
-    for (const o of bodyOptions(term.body, inner, ctx, leadSymbols)) options.push(o);
+    const body = bodyOptions(term.body, inner, ctx, leadSymbols);
+    if (!body.ok) return body;
+    for (const o of body.value) options.push(o);
   }
   const signed: TermOption[] = [];
   for (const o of options) {
@@ -219,52 +249,70 @@ function termOptions(term: Term, stack: StackEntry[], ctx: Context, leadSymbols:
     else signed.push(o);
     if (term.sign === "±") signed.push(negate(o, "-1 (other direction)"));
   }
-  return finalize(signed, nested ? term.presence === "may" : canBeAbsent(term, ctx.ruleset, leadSymbols));
+  return ok(finalize(signed, nested ? term.presence === "may" : canBeAbsent(term, ctx.ruleset, leadSymbols)));
 }
 
-function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols: string[]): TermOption[] {
+function bodyOptions(body: Body, stack: StackEntry[], ctx: Context, leadSymbols: string[]): Result<TermOption[]> {
   switch (body.kind) {
     case "symbol": {
       const symbol = ctx.ruleset.symbolByName.get(body.name) as LoadSymbol;
       const shared = ctx.shared.get(body.name);
-      const states = shared ? [shared] : (ctx.only?.get(body.name) ?? ctx.statesOf(body.name));
-      const factors = stack.map((e) => evaluateFactor(e.factor, e.choice, symbol, ctx.parameters));
-      const factor = factors.reduce((a, b) => a * b, 1);
+      let states: SymbolState[];
+      if (shared) states = [shared];
+      else {
+        const own = ctx.only?.get(body.name);
+        const all = own ? ok(own) : ctx.statesOf(body.name);
+        if (!all.ok) return all;
+        states = all.value;
+      }
+      let factor = 1;
+      for (const e of stack) {
+        const f = evaluateFactor(e.factor, e.choice, symbol, ctx.parameters);
+        if (!f.ok) return f;
+        factor *= f.value;
+      }
       const why = stack.map((e) => factorText(e.factor, e.choice)).concat(attributeNotes(stack, symbol, ctx));
-      return states.map((state) => ({
-        absent: false,
-        contributions: state.parts.map((p) => ({
-          caseIndex: p.caseIndex,
-          factor: factor * p.sign,
-          why: productText([...why, p.why]),
+      return ok(
+        states.map((state) => ({
+          absent: false,
+          contributions: state.parts.map((p) => ({
+            caseIndex: p.caseIndex,
+            factor: factor * p.sign,
+            why: productText([...why, p.why]),
+          })),
         })),
-      }));
+      );
     }
     case "lead":
-      return ctx.leader ? bodyOptions({ kind: "symbol", name: ctx.leader, span: body.span }, stack, ctx, leadSymbols) : [{ absent: false, contributions: [] }];
+      return ctx.leader ? bodyOptions({ kind: "symbol", name: ctx.leader, span: body.span }, stack, ctx, leadSymbols) : ok([{ absent: false, contributions: [] }]);
     case "group": {
       // An alternative whose loads are not in the table is not taken (it is not "no load"), unless none is there.
       const supplied = body.alternatives.filter((alt) => symbolsOfSum(alt, leadSymbols).some(ctx.hasCases));
       const out: TermOption[] = [];
-      for (const alternative of supplied.length > 0 ? supplied : body.alternatives) for (const o of sumOptions(alternative, stack, ctx, leadSymbols)) out.push(o);
-      return out;
+      for (const alternative of supplied.length > 0 ? supplied : body.alternatives) {
+        const options = sumOptions(alternative, stack, ctx, leadSymbols);
+        if (!options.ok) return options;
+        for (const o of options.value) out.push(o);
+      }
+      return ok(out);
     }
     case "others":
-      // Expanded into one term per non-leading symbol by planOne; never reached inside brackets (rejected on load).
-      return [];
+      // Expanded into one term per non-leading symbol by planBranch; never reached inside brackets (rejected on load).
+      return ok([]);
   }
 }
 
 /** A bracketed sum: the product of its terms' options, added together. */
-function sumOptions(sum: Sum, stack: StackEntry[], ctx: Context, leadSymbols: string[]): TermOption[] {
+function sumOptions(sum: Sum, stack: StackEntry[], ctx: Context, leadSymbols: string[]): Result<TermOption[]> {
   let combined: TermOption[] = [{ absent: false, contributions: [] }];
   for (const term of sum.terms) {
     const options = termOptions(term, stack, ctx, leadSymbols, true);
+    if (!options.ok) return options;
     const next: TermOption[] = [];
-    for (const a of combined) for (const b of options) next.push({ absent: false, contributions: [...a.contributions, ...b.contributions] });
+    for (const a of combined) for (const b of options.value) next.push({ absent: false, contributions: [...a.contributions, ...b.contributions] });
     combined = next;
   }
-  return combined;
+  return ok(combined);
 }
 
 /** Psi values and the like, named with the symbol they were read for: "psi0 of W = 0.6". */

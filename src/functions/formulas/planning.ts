@@ -4,13 +4,14 @@
  * a result too large for Excel, evaluate, lay the rows out under the stamp with
  * what the plan leaves out.
  */
-import { enumerateRows, planForTable, planOmissions, rowLabel, type CaseTable, type Plan, type Problem, type Result } from "../../core/index.js";
+import { cachedPlanForTable, enumerateRows, planOmissions, rowLabel, type CaseTable, type Plan, type Problem, type Result } from "../../core/index.js";
 import { given, type ArgumentSpec, type Formula, type FormulaArguments, type OutputCell } from "../formula.js";
 import { outputTable } from "../outputTable.js";
 import { payloadProblem, type PayloadShape } from "../payloadGuard.js";
 
 export function planOf(args: FormulaArguments): Result<Plan> {
-  return planForTable(given(args.ruleset, "ruleset").ruleset, args.params.input, args.table);
+  const { ruleset, status } = given(args.ruleset, "ruleset");
+  return cachedPlanForTable(ruleset, status.fingerprint, args.params.input, args.table);
 }
 
 /** Bytes of label per row, estimated from the first rows (with a margin): labels of one ruleset are alike in length. */

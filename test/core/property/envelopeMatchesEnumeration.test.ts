@@ -16,10 +16,14 @@ import {
   planForTable,
   readCaseTable,
   rowValue,
+  extremes,
   type CaseTable,
   type Plan,
+  type RowRef,
   type Ruleset,
 } from "../../../src/core/index.js";
+import { compilePlan, rowKey, rowRefOf, type CompiledPlan } from "../../../src/core/plan/compiledPlan.js";
+import { extremesEvaluator } from "../../../src/core/evaluate/extremes.js";
 import { rowContributions } from "../../../src/core/evaluate/rows.js";
 import { dot, referenceRows, vectorKey, type Vector } from "./referenceRows.js";
 import { caseHeaders, caseTable, rulesetFile } from "./randomRulesets.js";
@@ -153,3 +157,121 @@ describe("governing rows", () => {
     );
   });
 });
+
+/**
+ * The compiled plan (typed arrays, each distinct option and term once) is what
+ * the envelope and governing rows evaluate. It is held here to the plan it was
+ * made from: every concrete row it can name loads the cases the brute force
+ * says, and the row it names for each extreme is the one the documented
+ * tie-breaking gives (docs/design.md, "Exactness": first combination, branch,
+ * option), found by the plainest reading of that rule over the plan's objects.
+ */
+describe("the compiled plan", () => {
+  test("names exactly the concrete rows of brute-force enumeration", () => {
+    fc.assert(
+      fc.property(scenario, (generated) => {
+        const c = build(generated);
+        fc.pre(c !== null);
+        const { plan, reference } = c as Case;
+        const compiled = compilePlan(plan);
+        const rows = new Set<string>();
+        let count = 0;
+        for (let b = 0; b < compiled.branchCount; b++) {
+          for (const choices of allChoices(compiled, b)) {
+            rows.add(vectorKey(compiledRowVector(compiled, b, choices)));
+            // Row numbers count rows in the order enumerateRows lists them.
+            expect(rowKey(compiled, b, choices)).toBe(count++);
+          }
+        }
+        expect(count).toBe(plan.rowCount);
+        expect([...rows].sort()).toEqual([...new Set(reference.map(vectorKey))].sort());
+      }),
+      { numRuns: 800, seed: 11 },
+    );
+  });
+
+  test("gives the same extremes, bit for bit, and the same rows as the tie-breaking rule read plainly", () => {
+    fc.assert(
+      fc.property(scenario, (generated) => {
+        const c = build(generated);
+        fc.pre(c !== null);
+        const { plan, table } = c as Case;
+        const evaluator = extremesEvaluator(compilePlan(plan));
+        // The table's values, and all zeros: where every row ties, the very first row is named.
+        for (const x of [...table.values, new Float64Array(table.cases.length)]) {
+          const plain = plainExtremes(plan, x);
+          const found = evaluator.evaluate(x);
+          if (plain === null) {
+            expect(found).toBeNull();
+            continue;
+          }
+          expect(found).not.toBeNull();
+          if (!found) return;
+          expect(Object.is(found.maxValue, plain.max.value)).toBe(true);
+          expect(Object.is(found.minValue, plain.min.value)).toBe(true);
+          expect(rowRefOf(evaluator.compiled, found.maxBranch, found.maxChoices)).toEqual(plain.max.row);
+          expect(rowRefOf(evaluator.compiled, found.minBranch, found.minChoices)).toEqual(plain.min.row);
+          expect(extremes(plan, x)).toEqual(plain);
+        }
+        const zero = evaluator.evaluate(new Float64Array(table.cases.length));
+        if (zero) {
+          const first = enumerateRows(plan).next().value;
+          expect(rowRefOf(evaluator.compiled, zero.maxBranch, zero.maxChoices)).toEqual(first);
+          expect(rowRefOf(evaluator.compiled, zero.minBranch, zero.minChoices)).toEqual(first);
+        }
+      }),
+      { numRuns: 1500, seed: 20261203 },
+    );
+  });
+});
+
+/** Every choices vector of flat branch b, first term outermost. */
+function* allChoices(compiled: CompiledPlan, b: number): Generator<number[]> {
+  const terms = Array.from(compiled.branchTerms.subarray(compiled.branchStart[b], compiled.branchStart[b + 1]));
+  const sizes = terms.map((t) => compiled.termStart[t + 1] - compiled.termStart[t]);
+  if (sizes.some((n) => n === 0)) return;
+  const choices = sizes.map(() => 0);
+  for (;;) {
+    yield [...choices];
+    let t = sizes.length - 1;
+    while (t >= 0 && ++choices[t] === sizes[t]) choices[t--] = 0;
+    if (t < 0) return;
+  }
+}
+
+/** The factors a row puts on cases, read from the compiled arrays alone. */
+function compiledRowVector(compiled: CompiledPlan, b: number, choices: number[]): Vector {
+  const v: Vector = new Map();
+  choices.forEach((choice, t) => {
+    const term = compiled.branchTerms[compiled.branchStart[b] + t];
+    const option = compiled.termOptions[compiled.termStart[term] + choice];
+    for (let k = compiled.optionStart[option]; k < compiled.optionStart[option + 1]; k++) {
+      v.set(compiled.optionCase[k], (v.get(compiled.optionCase[k]) ?? 0) + compiled.optionFactor[k]);
+    }
+  });
+  return v;
+}
+
+/**
+ * The rule as written, over the plan's objects: in each branch every term takes
+ * its first option of largest (smallest) value, the branch's value is the sum
+ * in term order, and the first combination and branch of largest (smallest)
+ * value is named.
+ */
+function plainExtremes(plan: Plan, x: ArrayLike<number>): { max: { value: number; row: RowRef }; min: { value: number; row: RowRef } } | null {
+  let max: { value: number; row: RowRef } | null = null as { value: number; row: RowRef } | null;
+  let min: { value: number; row: RowRef } | null = null as { value: number; row: RowRef } | null;
+  plan.combinations.forEach((planned, c) =>
+    planned.branches.forEach((branch, b) => {
+      if (branch.terms.some((t) => t.options.length === 0)) return;
+      const values = branch.terms.map((t) => t.options.map((o) => o.contributions.reduce((s, k) => s + k.factor * x[k.caseIndex], 0)));
+      const high = values.map((v) => v.indexOf(Math.max(...v)));
+      const low = values.map((v) => v.indexOf(Math.min(...v)));
+      const highValue = values.reduce((s, v, t) => s + v[high[t]], 0);
+      const lowValue = values.reduce((s, v, t) => s + v[low[t]], 0);
+      if (max === null || highValue > max.value) max = { value: highValue, row: { combination: c, branch: b, choices: high } };
+      if (min === null || lowValue < min.value) min = { value: lowValue, row: { combination: c, branch: b, choices: low } };
+    }),
+  );
+  return max && min ? { max, min } : null;
+}

@@ -1,0 +1,180 @@
+/**
+ * A plan flattened into typed arrays for evaluation row after row: every
+ * distinct option once (its factors on cases as a sparse CSR matrix), every
+ * distinct term once (its options, in order), and every branch of every
+ * combination as a list of terms. An option such as 1.2D or a term such as
+ * "W, each direction both ways" recurs across combinations and branches; here
+ * it is valued once per result row.
+ *
+ * Nothing changes in what the plan means: the options of a term keep their
+ * order, so "first option wins" still names the same row, and each option's
+ * factors keep the plan's order, so every value is summed exactly as before.
+ */
+import type { Plan, RowRef } from "./types.js";
+
+export interface CompiledPlan {
+  plan: Plan;
+  caseCount: number;
+
+  /** Distinct options: option o loads case optionCase[k] with optionFactor[k] for k in optionStart[o] … optionStart[o+1]. */
+  optionCount: number;
+  optionStart: Int32Array;
+  optionCase: Int32Array;
+  optionFactor: Float64Array;
+
+  /** Distinct terms: term t takes option termOptions[k] for k in termStart[t] … termStart[t+1], in the plan's order. */
+  termCount: number;
+  termStart: Int32Array;
+  termOptions: Int32Array;
+
+  /** Branches in plan order (combination, then branch): branch b adds terms branchTerms[k] for k in branchStart[b] … branchStart[b+1]. */
+  branchCount: number;
+  branchStart: Int32Array;
+  branchTerms: Int32Array;
+  /** Combination and branch (within its combination) of each flat branch. */
+  branchCombination: Int32Array;
+  branchWithin: Int32Array;
+  /** Flat index of each combination's first branch. */
+  combinationBranch: Int32Array;
+  /** The most terms in any branch: the length of a choices array. */
+  maxTerms: number;
+
+  /**
+   * Row numbers (0-based, in the order enumerateRows lists them): row number of
+   * a branch's first row, and per branch term the step one option further
+   * takes (the first term outermost). Exact while the plan has at most 2^53 rows.
+   */
+  branchFirstRow: Float64Array;
+  termStride: Float64Array;
+  rowNumbersExact: boolean;
+
+  /** Labels already written, by row number (or branch and choices where row numbers are not exact). */
+  labels: Map<number | string, string>;
+}
+
+/** Labels kept per plan before the oldest are dropped: a long export names the same few rows again and again. */
+export const LABEL_CACHE_LIMIT = 50_000;
+
+const compiled = new WeakMap<Plan, CompiledPlan>();
+
+/** The plan's compiled form, made once per plan. */
+export function compiledPlanOf(plan: Plan): CompiledPlan {
+  let c = compiled.get(plan);
+  if (!c) compiled.set(plan, (c = compilePlan(plan)));
+  return c;
+}
+
+export function compilePlan(plan: Plan): CompiledPlan {
+  const optionIds = new Map<string, number>();
+  const optionStart: number[] = [0];
+  const optionCase: number[] = [];
+  const optionFactor: number[] = [];
+  const termIds = new Map<string, number>();
+  const termStart: number[] = [0];
+  const termOptions: number[] = [];
+  const branchStart: number[] = [0];
+  const branchTerms: number[] = [];
+  const branchCombination: number[] = [];
+  const branchWithin: number[] = [];
+  const combinationBranch: number[] = [];
+  const branchFirstRow: number[] = [];
+  const termStride: number[] = [];
+  let maxTerms = 0;
+  let rows = 0;
+
+  plan.combinations.forEach((planned, c) => {
+    combinationBranch.push(branchCombination.length);
+    planned.branches.forEach((branch, b) => {
+      const ids = branch.terms.map((term) => {
+        const options = term.options.map((option) => {
+          const key = option.contributions.map((x) => `${x.caseIndex}:${x.factor}`).join(",");
+          let id = optionIds.get(key);
+          if (id === undefined) {
+            optionIds.set(key, (id = optionIds.size));
+            for (const x of option.contributions) {
+              optionCase.push(x.caseIndex);
+              optionFactor.push(x.factor);
+            }
+            optionStart.push(optionCase.length);
+          }
+          return id;
+        });
+        const key = options.join(",");
+        let id = termIds.get(key);
+        if (id === undefined) {
+          termIds.set(key, (id = termIds.size));
+          termOptions.push(...options);
+          termStart.push(termOptions.length);
+        }
+        return id;
+      });
+      branchTerms.push(...ids);
+      branchStart.push(branchTerms.length);
+      branchCombination.push(c);
+      branchWithin.push(b);
+      maxTerms = Math.max(maxTerms, ids.length);
+      // Strides: the last term innermost, as enumerateRows counts.
+      const sizes = branch.terms.map((t) => t.options.length);
+      const strides = new Array<number>(sizes.length);
+      let step = 1;
+      for (let t = sizes.length - 1; t >= 0; t--) {
+        strides[t] = step;
+        step *= sizes[t];
+      }
+      termStride.push(...strides);
+      branchFirstRow.push(rows);
+      // A branch with a term of no options has no rows (enumerateRows skips it).
+      if (!sizes.includes(0)) rows += step;
+    });
+  });
+
+  return {
+    plan,
+    caseCount: plan.cases.length,
+    optionCount: optionIds.size,
+    optionStart: Int32Array.from(optionStart),
+    optionCase: Int32Array.from(optionCase),
+    optionFactor: Float64Array.from(optionFactor),
+    termCount: termIds.size,
+    termStart: Int32Array.from(termStart),
+    termOptions: Int32Array.from(termOptions),
+    branchCount: branchCombination.length,
+    branchStart: Int32Array.from(branchStart),
+    branchTerms: Int32Array.from(branchTerms),
+    branchCombination: Int32Array.from(branchCombination),
+    branchWithin: Int32Array.from(branchWithin),
+    combinationBranch: Int32Array.from(combinationBranch),
+    maxTerms,
+    branchFirstRow: Float64Array.from(branchFirstRow),
+    termStride: Float64Array.from(termStride),
+    rowNumbersExact: rows <= Number.MAX_SAFE_INTEGER,
+    labels: new Map(),
+  };
+}
+
+/** The plan's own reference to a row: flat branch b and one option per term. */
+export function rowRefOf(c: CompiledPlan, branch: number, choices: ArrayLike<number>): RowRef {
+  const terms = c.branchStart[branch + 1] - c.branchStart[branch];
+  const copy = new Array<number>(terms);
+  for (let t = 0; t < terms; t++) copy[t] = choices[t];
+  return { combination: c.branchCombination[branch], branch: c.branchWithin[branch], choices: copy };
+}
+
+/** The flat branch of a row reference. */
+export function flatBranch(c: CompiledPlan, ref: RowRef): number {
+  return c.combinationBranch[ref.combination] + ref.branch;
+}
+
+/** A key naming one row: its row number where exact, else the branch and choices written out. */
+export function rowKey(c: CompiledPlan, branch: number, choices: ArrayLike<number>): number | string {
+  const first = c.branchStart[branch];
+  const terms = c.branchStart[branch + 1] - first;
+  if (c.rowNumbersExact) {
+    let row = c.branchFirstRow[branch];
+    for (let t = 0; t < terms; t++) row += choices[t] * c.termStride[first + t];
+    return row;
+  }
+  let key = `${branch}/`;
+  for (let t = 0; t < terms; t++) key += `${t > 0 ? "," : ""}${choices[t]}`;
+  return key;
+}
