@@ -46,7 +46,7 @@ export type { Plan, PlanCase, PlannedCombination, RowRef } from "./plan/types.js
 export { envelope, envelopeOf, type EnvelopeEntry, type EnvelopeValue } from "./evaluate/envelope.js";
 export { extremes, type Extreme, type Extremes } from "./evaluate/extremes.js";
 export { governing, defaultCriteria, type GoverningRow, type GoverningOptions } from "./evaluate/governing.js";
-export { parseCriterion, type Criterion } from "./evaluate/criteria.js";
+export { parseCriterion, criterionNames, type Criterion } from "./evaluate/criteria.js";
 export { factored, type FactoredRow } from "./evaluate/factored.js";
 export { comboRows, type ComboRow } from "./evaluate/combos.js";
 export { explain, findRow, type Explanation, type ExplanationLine } from "./evaluate/explain.js";

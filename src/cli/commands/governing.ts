@@ -9,7 +9,7 @@
  * small table); further passes write every result's value in each governing
  * row. Memory stays flat in the number of result rows, whatever the criteria.
  */
-import { governing, parseCriterion, rowValue, defaultCriteria, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
+import { criterionNames, governing, parseCriterion, rowValue, defaultCriteria, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
 import { distance } from "fastest-levenshtein";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { openCases, type CaseStream } from "../input/caseInput.js";
@@ -77,21 +77,8 @@ async function governingOfTable(file: string, prepared: Prepared, table: CaseTab
   await writer.end();
 }
 
-/** Names a criterion may refer to: every [bracketed] header and every bare name but max/min. */
-function namesIn(text: string): string[] {
-  const names: string[] = [];
-  const re = /\[([^\]]*)\]|([\p{L}_][\p{L}\p{N}_]*)/gu;
-  let first = true;
-  for (const m of text.matchAll(re)) {
-    if (first && m[2] !== undefined && /^(max|min)$/i.test(m[2])) {
-      first = false;
-      continue;
-    }
-    first = false;
-    names.push((m[1] ?? m[2]).trim());
-  }
-  return names;
-}
+/** The result rows a criterion reads, as the expression language's parser finds them (not its functions). */
+const namesIn = criterionNames;
 
 function idColumnsText(n: number): string {
   return n === 1 ? "a result row's id is its first cell" : `a result row's id is its first ${n} cells joined with " / "`;
@@ -121,7 +108,7 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
       if (d <= 2 && (!best || d < best.d)) closest.set(name, { id: r.id, d });
     }
   }
-  const missing = [...wanted].filter((n) => !found.has(n) && !/^abs$/i.test(n));
+  const missing = [...wanted].filter((n) => !found.has(n));
   if (missing.length > 0) {
     throw cliErrorOf(
       missing.map((name) => {

@@ -4,6 +4,7 @@
  * factor written back as text for explanations.
  */
 import type { Arith } from "../expression/ast.js";
+import { evaluateArith } from "../expression/evaluate.js";
 import type { LoadSymbol } from "../ruleset/model.js";
 
 /** Which option each choice node takes. */
@@ -40,6 +41,9 @@ export function choiceNodes(a: Arith | null, out: Arith[] = []): Arith[] {
     case "binary":
       choiceNodes(a.left, out);
       choiceNodes(a.right, out);
+      break;
+    case "call":
+      for (const x of a.args) choiceNodes(x, out);
       break;
     case "number":
     case "name":
@@ -81,44 +85,19 @@ function reachedKey(a: Arith | null, m: ChoiceAssignment): string {
       return reachedKey(a.operand, m);
     case "binary":
       return `${reachedKey(a.left, m)},${reachedKey(a.right, m)}`;
+    case "call":
+      return a.args.map((x) => reachedKey(x, m)).join(",");
     default:
       return "";
   }
 }
 
 export function evaluateFactor(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope: FactorScope): number {
-  const value = evaluate(a, choice, symbol, scope);
-  if (!Number.isFinite(value)) throw new FactorError(`the factor on ${symbol.name} is not a finite number (a division by zero?)`, a.span.start);
-  return value;
-}
-
-function evaluate(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope: FactorScope): number {
-  switch (a.kind) {
-    case "number":
-      return a.value;
-    case "name":
-      return valueOf(a.name, a.span.start, symbol, scope);
-    case "negate":
-      return -evaluate(a.operand, choice, symbol, scope);
-    case "binary": {
-      const l = evaluate(a.left, choice, symbol, scope);
-      const r = evaluate(a.right, choice, symbol, scope);
-      switch (a.op) {
-        case "+":
-          return l + r;
-        case "-":
-          return l - r;
-        case "*":
-          return l * r;
-        case "/":
-          if (r === 0) throw new FactorError(`division by zero in the factor on ${symbol.name}`, a.right.span.start);
-          return l / r;
-      }
-    }
-    // falls through: every binary operator returns above
-    case "choice":
-      return evaluate(a.options[choice.get(a) ?? 0], choice, symbol, scope);
-  }
+  // The expression language's one evaluator; names read the symbol's attributes, then the parameters.
+  const result = evaluateArith(a, { name: (n) => valueOf(n.name, n.span.start, symbol, scope), option: (node) => choice.get(node) ?? 0 });
+  if (!result.ok) throw new FactorError(`${result.fault.message} in the factor on ${symbol.name}`, result.fault.position);
+  if (!Number.isFinite(result.value)) throw new FactorError(`the factor on ${symbol.name} is not a finite number (a division by zero?)`, a.span.start);
+  return result.value;
 }
 
 function valueOf(name: string, position: number, symbol: LoadSymbol, scope: FactorScope): number {
@@ -137,7 +116,7 @@ export function factorText(a: Arith, choice: ChoiceAssignment): string {
   return render(a, choice, 0);
 }
 
-const PRECEDENCE = { "+": 1, "-": 1, "*": 2, "/": 2 } as const;
+const PRECEDENCE = { "+": 1, "-": 1, "*": 2, "/": 2, "^": 4 } as const;
 
 function render(a: Arith, choice: ChoiceAssignment, parent: number): string {
   switch (a.kind) {
@@ -146,13 +125,19 @@ function render(a: Arith, choice: ChoiceAssignment, parent: number): string {
     case "name":
       return a.name;
     case "negate":
-      return `-${render(a.operand, choice, 3)}`;
+      // A negative base of a power takes brackets: (-2) ^ 2.
+      return parent > 3 ? `(-${render(a.operand, choice, 3)})` : `-${render(a.operand, choice, 3)}`;
     case "choice":
       return render(a.options[choice.get(a) ?? 0], choice, parent);
+    case "call":
+      return `${a.fn}(${a.args.map((x) => render(x, choice, 0)).join(", ")})`;
     case "binary": {
       const p = PRECEDENCE[a.op];
       const op = a.op === "*" ? "×" : a.op;
-      const text = `${render(a.left, choice, p)} ${op} ${render(a.right, choice, p + (a.op === "-" || a.op === "/" ? 1 : 0))}`;
+      // ^ groups from the right (2 ^ 3 ^ 2 is 2 ^ 9), the others from the left.
+      const left = render(a.left, choice, p + (a.op === "^" ? 1 : 0));
+      const right = render(a.right, choice, a.op === "^" ? 3 : p + (a.op === "-" || a.op === "/" ? 1 : 0));
+      const text = `${left} ${op} ${right}`;
       return p < parent ? `(${text})` : text;
     }
   }

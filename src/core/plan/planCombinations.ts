@@ -291,6 +291,9 @@ function attributeNotes(stack: StackEntry[], symbol: LoadSymbol, ctx: Context): 
       case "choice":
         a.options.forEach(visit);
         break;
+      case "call":
+        a.args.forEach(visit);
+        break;
       case "number":
         break;
     }
