@@ -20,6 +20,8 @@ export {
 // Rulesets
 export { loadRuleset } from "./ruleset/loadRuleset.js";
 export { duplicateKeys, type DuplicateKey } from "./ruleset/jsonSyntax.js";
+export { jsonTextProblem, jsonValueProblems } from "./ruleset/jsonLimits.js";
+export { LIMITS, FORBIDDEN_KEYS } from "./limits.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
 export { fingerprintOf, shortFingerprint } from "./ruleset/fingerprint.js";

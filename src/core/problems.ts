@@ -11,6 +11,9 @@ export type ProblemKind =
   | "ruleset-field"
   | "ruleset-duplicate"
   | "ruleset-name-clash"
+  // any input read from JSON or text: beyond a stated limit (src/core/limits.ts), or a field name that reaches prototypes
+  | "input-limit"
+  | "input-forbidden-key"
   // expressions
   | "expression-syntax"
   | "expression-unknown-name"

@@ -76,7 +76,7 @@ export function buildRuleset(file: RulesetFile, origin: Ruleset["origin"] = "fil
           );
         }
       }
-      if (!p.choices[p.default]) {
+      if (!Object.hasOwn(p.choices, p.default)) {
         problems.push(
           problem("parameter-not-allowed", `default "${p.default}" is not one of the choices (${entries.map(([c]) => c).join(", ")})`, {
             path: [...path, "default"],

@@ -5,6 +5,8 @@
  * JSON.parse accepts silently (keeping the last), is found the same way.
  */
 import { parse, parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser";
+import { LIMITS } from "../limits.js";
+import { lineAndColumn, nestingBeyond } from "./jsonLimits.js";
 
 const WORDS: Record<string, string> = {
   InvalidSymbol: "unexpected text",
@@ -25,6 +27,8 @@ const WORDS: Record<string, string> = {
 /** "a "," is expected at line 3, column 9", or the parser's own message when the scanner finds nothing. */
 export function jsonSyntaxError(text: string, fallback: string): string {
   if (text.trim() === "") return "the text is empty";
+  // The scanner reads nested values recursively: text beyond the nesting limit is refused before it (jsonLimits.ts).
+  if (nestingBeyond(text, LIMITS.jsonNesting) !== null) return fallback;
   const errors: ParseError[] = [];
   parse(text, errors, { disallowComments: true, allowTrailingComma: false, allowEmptyContent: false });
   const first = errors[0];
@@ -46,6 +50,7 @@ export interface DuplicateKey {
 
 /** Every field name written twice in the same object, with the path and place of the later one. */
 export function duplicateKeys(text: string): DuplicateKey[] {
+  if (nestingBeyond(text, LIMITS.jsonNesting) !== null) return [];
   const root = parseTree(text, [], { disallowComments: true, allowTrailingComma: false });
   const out: DuplicateKey[] = [];
   const walk = (node: Node, path: (string | number)[]) => {
@@ -65,9 +70,4 @@ export function duplicateKeys(text: string): DuplicateKey[] {
   };
   if (root) walk(root, []);
   return out;
-}
-
-function lineAndColumn(text: string, offset: number): { line: number; column: number } {
-  const before = text.slice(0, offset);
-  return { line: before.split("\n").length, column: offset - before.lastIndexOf("\n") };
 }

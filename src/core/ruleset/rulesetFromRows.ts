@@ -48,7 +48,7 @@ export function rulesetFromRows(rows: Cell[][]): Result<Ruleset> {
     }
     for (const t of tokens.tokens) {
       if (t.kind !== "name" || (KEYWORDS as readonly string[]).includes(t.text)) continue;
-      if (t.text in SYMBOL_CATALOGUE) used.add(t.text);
+      if (Object.hasOwn(SYMBOL_CATALOGUE, t.text)) used.add(t.text);
       else parameterNames.add(t.text);
     }
     combinations.push({ id, expression, clause: clause === "" ? "(no clause given)" : clause });
