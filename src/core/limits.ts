@@ -13,11 +13,11 @@ export const LIMITS = {
   /** Ways the "(a or b)" choices of one expression's factors can be taken together (shipped: at most 4). */
   factorChoices: 1_000,
   /** Characters in one ruleset file (the largest shipped file has about 8,200). */
-  rulesetCharacters: 1_048_576,
+  rulesetCharacters: 262_144,
   /** Objects and lists inside one another in a JSON file (a shipped ruleset nests 5 deep, a case file 2). */
   jsonNesting: 64,
   /** Members of one object or list in a ruleset: symbols, parameters, combinations, notes… (shipped: at most 13). */
-  rulesetMembers: 1_000,
+  rulesetMembers: 200,
 } as const;
 
 /** Field names that reach an object's prototype when a program copies fields by name. */

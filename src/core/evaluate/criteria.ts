@@ -10,7 +10,7 @@
  * row limit. A row where it has no value (a division by zero, the square root
  * of a negative number) is refused with the row and the character.
  */
-import type { Arith, NameNode } from "../expression/ast.js";
+import type { Arith } from "../expression/ast.js";
 import { parseCriterionText, type ComponentNames } from "../expression/criterion.js";
 import { evaluateArith, type ArithEnvironment, type ArithFault } from "../expression/evaluate.js";
 import { fail, ok, problem, type Problem, type Result } from "../problems.js";
@@ -18,10 +18,10 @@ import { nearest } from "../text/nearest.js";
 
 export { criterionNames } from "../expression/criterion.js";
 
-/** A criterion's expression: the arithmetic, and the component each of its names reads. */
+/** A criterion's expression: the arithmetic, and the index of the component each of its names reads. */
 export interface CriterionExpr {
   tree: Arith;
-  components: ReadonlyMap<NameNode, number>;
+  components: ReadonlyMap<string, number>;
 }
 
 export interface Affine {
@@ -68,7 +68,7 @@ export function affine(e: CriterionExpr): Affine | null {
       case "number":
         return { weights: new Map(), constant: a.value };
       case "name":
-        return { weights: new Map([[e.components.get(a) as number, 1]]), constant: 0 };
+        return { weights: new Map([[e.components.get(a.name) as number, 1]]), constant: 0 };
       case "negate": {
         const x = walk(a.operand);
         return x && scale(x, -1);
@@ -125,7 +125,7 @@ function add(a: Affine, b: Affine, sign: number): Affine {
 }
 
 function environment(e: CriterionExpr, values: ArrayLike<number>): ArithEnvironment {
-  return { name: (node) => values[e.components.get(node) as number] };
+  return { name: (node) => values[e.components.get(node.name) as number] };
 }
 
 /**

@@ -15,8 +15,8 @@ export type Sense = "max" | "min";
 export interface ParsedCriterion {
   sense: Sense;
   expr: Arith;
-  /** Every name node of `expr` with the component it reads. */
-  components: ReadonlyMap<NameNode, number>;
+  /** Every name `expr` reads, with the index of its component. */
+  components: ReadonlyMap<string, number>;
 }
 
 /** What a criterion's names may be: the components, and a message for a name that is none of them. */
@@ -65,7 +65,7 @@ export function criterionNames(text: string): string[] {
 }
 
 class CriterionParser extends ArithmeticParser {
-  private readonly components = new Map<NameNode, number>();
+  private readonly components = new Map<string, number>();
 
   constructor(
     tokens: Token[],
@@ -95,7 +95,7 @@ class CriterionParser extends ArithmeticParser {
     }
     this.next();
     const node: NameNode = { kind: "name", name: token.text, span: this.spanOf(token) };
-    this.components.set(node, index);
+    this.components.set(token.text, index);
     return node;
   }
 
@@ -142,7 +142,7 @@ class CriterionParser extends ArithmeticParser {
 
   /** Every name node reached is mapped (a programming error otherwise). */
   private checkComponents(a: Arith): void {
-    if (a.kind === "name" && !this.components.has(a)) throw new Error(`criterion name "${a.name}" was read without its component`);
+    if (a.kind === "name" && !this.components.has(a.name)) throw new Error(`criterion name "${a.name}" was read without its component`);
     operands(a).forEach((o) => this.checkComponents(o));
   }
 }

@@ -61,8 +61,13 @@ const SINGLE = new Map<string, TokenKind>([
 
 const NAME_START = /[\p{L}_]/u;
 const NAME_PART = /[\p{L}\p{N}_]/u;
-const DIGIT = /[0-9]/;
-const SPACE = /\s/;
+
+// Plain ASCII is decided by character code; the Unicode classes only for the rest (speed on long texts).
+const isDigit = (ch: string | undefined): boolean => ch !== undefined && ch >= "0" && ch <= "9";
+const isAsciiLetter = (ch: string): boolean => (ch >= "a" && ch <= "z") || (ch >= "A" && ch <= "Z") || ch === "_";
+const isSpace = (ch: string): boolean => ch === " " || (ch >= "\t" && ch <= "\r") || (ch > "\u007f" && /\s/.test(ch));
+const isNameStart = (ch: string): boolean => isAsciiLetter(ch) || (ch > "\u007f" && NAME_START.test(ch));
+const isNamePart = (ch: string): boolean => isAsciiLetter(ch) || isDigit(ch) || (ch > "\u007f" && NAME_PART.test(ch));
 
 export function lex(text: string): LexResult {
   const tokens: Token[] = [];
@@ -70,7 +75,7 @@ export function lex(text: string): LexResult {
   while (i < text.length) {
     const ch = text[i];
     const position = i + 1;
-    if (SPACE.test(ch)) {
+    if (isSpace(ch)) {
       i++;
       continue;
     }
@@ -86,16 +91,16 @@ export function lex(text: string): LexResult {
       i++;
       continue;
     }
-    if (DIGIT.test(ch) || (ch === "." && DIGIT.test(text[i + 1] ?? ""))) {
+    if (isDigit(ch) || (ch === "." && isDigit(text[i + 1]))) {
       let j = i;
-      while (j < text.length && DIGIT.test(text[j])) j++;
+      while (j < text.length && isDigit(text[j])) j++;
       if (text[j] === ".") {
         j++;
-        while (j < text.length && DIGIT.test(text[j])) j++;
+        while (j < text.length && isDigit(text[j])) j++;
       }
       if (text[j] === "." || text[j] === ",") {
         // "1.2.3" or a decimal comma: refuse rather than guess.
-        if (text[j] === "." || DIGIT.test(text[j + 1] ?? "")) {
+        if (text[j] === "." || isDigit(text[j + 1])) {
           return {
             ok: false,
             position: j + 1,
@@ -116,9 +121,9 @@ export function lex(text: string): LexResult {
       i = j;
       continue;
     }
-    if (NAME_START.test(ch)) {
+    if (isNameStart(ch)) {
       let j = i + 1;
-      while (j < text.length && NAME_PART.test(text[j])) j++;
+      while (j < text.length && isNamePart(text[j])) j++;
       tokens.push({ kind: "name", text: text.slice(i, j), position, end: j + 1 });
       i = j;
       continue;
