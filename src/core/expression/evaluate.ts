@@ -43,9 +43,10 @@ export function evaluateArith(a: Arith, env: ArithEnvironment): ArithValue {
 }
 
 /**
- * The first fault of the parts of an expression that read no name and make no
- * choice (`1/0`, `sqrt(-4)`), which no later value can mend: a parser refuses
- * them as soon as they are read.
+ * The first fault that no value of a name can mend: in the parts of an
+ * expression that read no name and make no choice (`1/0`, `sqrt(-4)`), and a
+ * division by such a part that is zero (`V / 0`). A parser refuses these as
+ * soon as they are read.
  */
 export function constantFault(a: Arith): ArithFault | null {
   if (isConstant(a)) {
@@ -55,6 +56,10 @@ export function constantFault(a: Arith): ArithFault | null {
   for (const o of operands(a)) {
     const f = constantFault(o);
     if (f) return f;
+  }
+  if (a.kind === "binary" && a.op === "/" && isConstant(a.right)) {
+    const divisor = evaluateArith(a.right, { name: () => NaN });
+    if (divisor.ok && divisor.value === 0) return { kind: "division-by-zero", position: a.right.span.start, message: "division by zero" };
   }
   return null;
 }
@@ -99,11 +104,11 @@ function value(a: Arith, env: ArithEnvironment): number {
 
 function power(base: number, exponent: number, node: Extract<Arith, { kind: "binary" }>): number {
   if (base === 0 && exponent < 0) {
-    throw new Fault({ kind: "division-by-zero", position: node.left.span.start, message: `0 to the power ${exponent} is a division by zero` });
+    throw new Fault({ kind: "division-by-zero", position: node.left.span.start, message: `0 to the power ${shown(exponent)} is a division by zero` });
   }
   const v = Math.pow(base, exponent);
   if (Number.isNaN(v)) {
-    throw new Fault({ kind: "power-not-real", position: node.right.span.start, message: `${base} to the power ${exponent} is not a real number (a negative number to a fractional power)` });
+    throw new Fault({ kind: "power-not-real", position: node.right.span.start, message: `${shown(base)} to the power ${shown(exponent)} is not a real number (a negative number to a fractional power)` });
   }
   return finite(v, node);
 }
@@ -114,7 +119,7 @@ function call(a: Extract<Arith, { kind: "call" }>, env: ArithEnvironment): numbe
       return Math.abs(value(a.args[0], env));
     case "sqrt": {
       const x = value(a.args[0], env);
-      if (x < 0) throw new Fault({ kind: "square-root-of-negative", position: a.span.start, message: `the square root of a negative number (${x})` });
+      if (x < 0) throw new Fault({ kind: "square-root-of-negative", position: a.span.start, message: `the square root of a negative number (${shown(x)})` });
       return Math.sqrt(x);
     }
     case "max": {
@@ -128,6 +133,11 @@ function call(a: Extract<Arith, { kind: "call" }>, env: ArithEnvironment): numbe
       return m;
     }
   }
+}
+
+/** A number in a message as a person reads it: 12 significant digits at most (-4.2, not -4.199999999999999). */
+function shown(v: number): string {
+  return String(Number(v.toPrecision(12)));
 }
 
 function finite(v: number, node: Arith): number {
