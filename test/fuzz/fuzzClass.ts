@@ -25,8 +25,10 @@ export function fuzzClass<T>(name: string, share: number, inputs: fc.Arbitrary<T
           fc.property(inputs, (input) => tally.check(input, target, describe)),
           { numRuns: runs, seed: seedOf(name), endOnFailure: true },
         );
-      } catch {
-        // The failing inputs are in tally.failures, reported below with what went wrong.
+      } catch (e) {
+        // A failing input is in tally.failures, reported below with what went wrong; anything else
+        // (a generator that throws) is a defect of the test itself.
+        if (tally.failures.length === 0) throw e;
       } finally {
         tally.save();
       }

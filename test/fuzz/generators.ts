@@ -157,6 +157,15 @@ function setOwn(o: object, key: string | number, value: Json): void {
   Object.defineProperty(o, key, { value, enumerable: true, writable: true, configurable: true });
 }
 
+/** The root's field `key` as an object to add to, made one if an earlier change left something else there. */
+function objectField(root: RulesetJson, key: string): object {
+  const v = root[key];
+  if (v !== null && typeof v === "object" && !Array.isArray(v)) return v;
+  const fresh = {};
+  setOwn(root, key, fresh);
+  return fresh;
+}
+
 function parentOf(root: Json, path: (string | number)[]): Json {
   let v = root;
   for (const k of path.slice(0, -1)) v = (v as Record<string | number, Json>)[k];
@@ -179,6 +188,10 @@ const change: fc.Arbitrary<Change> = fc.record({
 /** One structural change to a ruleset value: its fields, names, ids, parameters and expressions. */
 function applyChange(root: RulesetJson, c: Change): void {
   const all = paths(root as Json).filter((p) => p.length > 0);
+  if (all.length === 0) {
+    setOwn(root, "format", c.value); // every field deleted by earlier changes
+    return;
+  }
   const path = all[c.at % all.length];
   const parent = parentOf(root as Json, path) as Record<string | number, Json> | Json[];
   const key = path[path.length - 1];
@@ -215,7 +228,7 @@ function applyChange(root: RulesetJson, c: Change): void {
       }
       break;
     case 7: // a choice parameter whose values name itself, a symbol, or whose default is no choice
-      setOwn((root.parameters ?? (root.parameters = {})) as object, "cat", {
+      setOwn(objectField(root, "parameters"), "cat", {
         type: "choice",
         description: "self-referring choice",
         default: ["cat", "toString", "A", "constructor"][c.pick % 4],
@@ -238,7 +251,7 @@ function applyChange(root: RulesetJson, c: Change): void {
       }
       break;
     case 10: // a parameter named like a symbol, or with min above max
-      setOwn((root.parameters ?? (root.parameters = {})) as object, ["D", "W", "k"][c.pick % 3], { type: "number", description: "clash", min: 2, max: 1, default: c.value as number });
+      setOwn(objectField(root, "parameters"), ["D", "W", "k"][c.pick % 3], { type: "number", description: "clash", min: 2, max: 1, default: c.value as number });
       break;
     case 11: // a provenance entry naming combinations that do not exist
       if (Array.isArray(root.provenance)) root.provenance.push({ source: "x", status: "confirmed", covers: "x", combinations: Array.from({ length: 1 + (c.pick % 220) }, (_, k) => `missing${k}`) });

@@ -77,9 +77,6 @@ async function governingOfTable(file: string, prepared: Prepared, table: CaseTab
   await writer.end();
 }
 
-/** The result rows a criterion reads, as the expression language's parser finds them (not its functions). */
-const namesIn = criterionNames;
-
 function idColumnsText(n: number): string {
   return n === 1 ? "a result row's id is its first cell" : `a result row's id is its first ${n} cells joined with " / "`;
 }
@@ -92,8 +89,9 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
       `${file}: cases are columns here, so every result row is a component; say which rows govern with --criterion (e.g. --criterion "max [C1 top]"), or use \`loadwright envelope\` for every result's largest and smallest value`,
     );
   }
-  // Pass 1: keep the result rows the criteria name; note the closest id to each name that is missing.
-  const wanted = new Set(options.criterion.flatMap(namesIn));
+  // Pass 1: keep the result rows the criteria name (as the parser reads them, not their functions);
+  // note the closest id to each name that is missing.
+  const wanted = new Set(options.criterion.flatMap(criterionNames));
   const found = new Map<string, Float64Array>();
   const closest = new Map<string, { id: string; d: number }>();
   for await (const r of resultsOf(first, "governing (choosing rows)")) {
@@ -112,7 +110,7 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
   if (missing.length > 0) {
     throw cliErrorOf(
       missing.map((name) => {
-        const text = options.criterion.find((t) => namesIn(t).includes(name)) ?? "";
+        const text = options.criterion.find((t) => criterionNames(t).includes(name)) ?? "";
         const guess = closest.get(name);
         return `--criterion "${text}": no result row of ${file} is named "${name}"${guess ? `; did you mean "${guess.id}"?` : ""} (${idColumnsText(idColumnsOf(options.idColumns))}; write names with spaces in [brackets])`;
       }),
