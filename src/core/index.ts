@@ -21,6 +21,8 @@ export {
 // Rulesets
 export { loadRuleset } from "./ruleset/loadRuleset.js";
 export { duplicateKeys, jsonSyntaxError, type DuplicateKey } from "./ruleset/jsonSyntax.js";
+export { jsonTextProblem, jsonValueProblems } from "./ruleset/jsonLimits.js";
+export { LIMITS, FORBIDDEN_KEYS } from "./limits.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
 export { typedRuleset, clearTypedRulesets, TYPED_RULESET_LIMIT, type TypedRuleset } from "./ruleset/typedRulesets.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";
@@ -67,7 +69,8 @@ export { envelope, envelopeOf, type EnvelopeEntry, type EnvelopeValue } from "./
 export { extremes, extremesEvaluator, type Extreme, type Extremes, type ExtremesEvaluator, type RowExtremes } from "./evaluate/extremes.js";
 export { compiledPlanOf, type CompiledPlan } from "./plan/compiledPlan.js";
 export { governing, defaultCriteria, type GoverningRow, type GoverningOptions } from "./evaluate/governing.js";
-export { parseCriterion, type Criterion } from "./evaluate/criteria.js";
+export { parseCriterion, criterionNames, type Criterion } from "./evaluate/criteria.js";
+export type { Arith } from "./expression/ast.js";
 export { factored, type FactoredRow } from "./evaluate/factored.js";
 export { comboRows, type ComboRow } from "./evaluate/combos.js";
 export { explain, findRow, type Explanation, type ExplanationLine } from "./evaluate/explain.js";

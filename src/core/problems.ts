@@ -14,6 +14,9 @@ export type ProblemKind =
   // the rulesets a workbook can name
   | "ruleset-unknown"
   | "ruleset-store"
+  // any input read from JSON or text: beyond a stated limit (src/core/limits.ts), or a field name that reaches prototypes
+  | "input-limit"
+  | "input-forbidden-key"
   // expressions
   | "expression-syntax"
   | "expression-unknown-name"

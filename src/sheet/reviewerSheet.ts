@@ -20,7 +20,7 @@
  * and the task pane can write it with one loop over cells. Nothing here is a
  * cached result: every number below the case and factor tables is a formula.
  */
-import { columnLetters, comboRows, defaultCriteria, type CaseTable, type Criterion, type Plan, type Problem, type Result } from "../core/index.js";
+import { columnLetters, comboRows, defaultCriteria, type Arith, type CaseTable, type Criterion, type Plan, type Problem, type Result } from "../core/index.js";
 
 export type SheetCell =
   | { address: string; row: number; column: number; kind: "text"; value: string; style?: SheetStyle }
@@ -184,20 +184,31 @@ function refused(kind: Problem["kind"], message: string): Result<never> {
   return { ok: false, problems: [{ kind, message, place: {} }] };
 }
 
-/** A criterion written as a spreadsheet formula over one row's value cells. */
+/**
+ * A criterion written as a spreadsheet formula over one row's value cells.
+ * Every operation is bracketed: a spreadsheet reads -2^2 as 4, the criterion as -4.
+ */
 export function criterionFormula(e: Criterion["expr"], cell: (component: number) => string): string {
-  switch (e.kind) {
-    case "number":
-      return numberLiteral(e.value);
-    case "component":
-      return cell(e.index);
-    case "negate":
-      return `-(${criterionFormula(e.operand, cell)})`;
-    case "abs":
-      return `ABS(${criterionFormula(e.operand, cell)})`;
-    case "binary":
-      return `(${criterionFormula(e.left, cell)}${e.op}${criterionFormula(e.right, cell)})`;
-  }
+  const write = (a: Arith): string => {
+    switch (a.kind) {
+      case "number":
+        return numberLiteral(a.value);
+      case "name": {
+        const index = e.components.get(a.name);
+        if (index === undefined) throw new Error(`criterion name "${a.name}" is not a component`);
+        return cell(index);
+      }
+      case "negate":
+        return `(-${write(a.operand)})`;
+      case "binary":
+        return `(${write(a.left)}${a.op}${write(a.right)})`;
+      case "call":
+        return `${a.fn.toUpperCase()}(${a.args.map(write).join(",")})`;
+      case "choice":
+        throw new Error("a criterion has no choices");
+    }
+  };
+  return write(e.tree);
 }
 
 /** A number as a formula literal: plain decimals, never exponent notation. */

@@ -5,7 +5,7 @@
  * a field written twice in one object, of which the parser silently keeps the last.
  */
 import { findNodeAtLocation, parseTree, type Node, type ParseError } from "jsonc-parser";
-import { duplicateKeys as findDuplicateKeys } from "../core/index.js";
+import { duplicateKeys as findDuplicateKeys, jsonTextProblem } from "../core/index.js";
 
 export interface TextSpot {
   /** 0-based offset of the first character and the length to select. */
@@ -23,7 +23,11 @@ export function spotAt(text: string, offset: number, length: number): TextSpot {
   return { offset, length, line, column };
 }
 
+/** Text nested beyond the engine's limit is not read as a tree (the reader recurses); the engine refuses it. */
+const tooDeep = (text: string) => jsonTextProblem(text, { what: "draft" }) !== null;
+
 function tree(text: string): Node | undefined {
+  if (tooDeep(text)) return undefined;
   const errors: ParseError[] = [];
   return parseTree(text, errors, { disallowComments: true, allowTrailingComma: false });
 }
@@ -74,6 +78,7 @@ export function duplicateKeys(text: string): DuplicateKey[] {
 
 /** The spot of the first JSON syntax error, if the text has one. */
 export function syntaxErrorSpot(text: string): TextSpot | null {
+  if (tooDeep(text)) return null;
   const errors: ParseError[] = [];
   parseTree(text, errors, { disallowComments: true, allowTrailingComma: false });
   const first = errors[0];

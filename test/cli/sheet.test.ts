@@ -31,7 +31,8 @@ W:W,25,7,29
 E:x,12,15,66
 E:y,-8,6,-21
 `;
-const CRITERIA = ["max |M|", "min P", "max P/1000 + M/200", "max |V|"];
+// The last is not linear: the engine evaluates it on every row, the sheet writes SQRT and ^ as the spreadsheet reads them.
+const CRITERIA = ["max |M|", "min P", "max P/1000 + M/200", "max |V|", "max sqrt(V^2 + M^2)"];
 // SDS given (asce7-16-strength has no default for it); E's two cases taken with the orthogonal share (a case map row).
 const RULESET = ["--ruleset", "asce7-16-strength", "--param", "SDS=1.0", "--map", "map.csv"];
 

@@ -9,7 +9,7 @@
  * small table); further passes write every result's value in each governing
  * row. Memory stays flat in the number of result rows, whatever the criteria.
  */
-import { governing, parseCriterion, rowValue, defaultCriteria, didYouMean, NearestName, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
+import { criterionNames, governing, parseCriterion, rowValue, defaultCriteria, didYouMean, NearestName, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { openCases, type CaseStream } from "../input/caseInput.js";
 import { jsonNumber, numberText } from "../output/cells.js";
@@ -76,22 +76,6 @@ async function governingOfTable(file: string, prepared: Prepared, table: CaseTab
   await writer.end();
 }
 
-/** Names a criterion may refer to: every [bracketed] header and every bare name but max/min. */
-function namesIn(text: string): string[] {
-  const names: string[] = [];
-  const re = /\[([^\]]*)\]|([\p{L}_][\p{L}\p{N}_]*)/gu;
-  let first = true;
-  for (const m of text.matchAll(re)) {
-    if (first && m[2] !== undefined && /^(max|min)$/i.test(m[2])) {
-      first = false;
-      continue;
-    }
-    first = false;
-    names.push((m[1] ?? m[2]).trim());
-  }
-  return names;
-}
-
 function idColumnsText(n: number): string {
   return n === 1 ? "a result row's id is its first cell" : `a result row's id is its first ${n} cells joined with " / "`;
 }
@@ -104,8 +88,9 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
       `${file}: cases are columns here, so every result row is a component; say which rows govern with --criterion (e.g. --criterion "max [C1 top]"), or use \`loadwright envelope\` for every result's largest and smallest value`,
     );
   }
-  // Pass 1: keep the result rows the criteria name; note the closest id to each name that is missing.
-  const wanted = new Set(options.criterion.flatMap(namesIn));
+  // Pass 1: keep the result rows the criteria name (as the parser reads them, not their functions);
+  // note the closest id to each name that is missing.
+  const wanted = new Set(options.criterion.flatMap(criterionNames));
   const found = new Map<string, Float64Array>();
   const closest = new Map([...wanted].map((name) => [name, new NearestName(name)]));
   for await (const r of resultsOf(first, "governing (choosing rows)")) {
@@ -115,11 +100,11 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
     }
     for (const name of wanted) if (!found.has(name)) closest.get(name)?.consider(r.id);
   }
-  const missing = [...wanted].filter((n) => !found.has(n) && !/^abs$/i.test(n));
+  const missing = [...wanted].filter((n) => !found.has(n));
   if (missing.length > 0) {
     throw cliErrorOf(
       missing.map((name) => {
-        const text = options.criterion.find((t) => namesIn(t).includes(name)) ?? "";
+        const text = options.criterion.find((t) => criterionNames(t).includes(name)) ?? "";
         return `--criterion "${text}": no result row of ${file} is named "${name}"${didYouMean(closest.get(name)?.best)} (${idColumnsText(idColumnsOf(options.idColumns))}; write names with spaces in [brackets])`;
       }),
     );

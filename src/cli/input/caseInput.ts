@@ -9,6 +9,8 @@ import {
   cellText,
   columnLetters,
   isBlank,
+  jsonTextProblem,
+  jsonValueProblems,
   readCaseHeaders,
   readCaseTable,
   readValue,
@@ -356,12 +358,17 @@ function allBlank(source: CsvSource): boolean {
 
 function openJsonCases(file: string, ruleset: Ruleset, options: CaseFileOptions): CaseFile {
   const text = readText(file, "case file");
+  // Nested beyond the limit: refused before the recursive readers that locate places see it.
+  const deep = jsonTextProblem(text, { what: "case file" });
+  if (deep) throw new CliError(`${file}: ${deep.message}`);
   let data: unknown;
   try {
     data = JSON.parse(text);
   } catch (e) {
     throw new CliError(`${file}${jsonErrorPlace(text)}: not valid JSON: ${jsonErrorMessage(e)}`);
   }
+  const forbidden = jsonValueProblems(data);
+  if (forbidden.length > 0) throw cliErrorOf(forbidden.map((p) => `${file} ${lineColumn(text, p.place.path ?? [])}: ${p.message}`));
   const at: CellLocator = {
     cell: (row, column) => lineColumn(text, [row, column]),
     row: (row) => lineColumn(text, [row]),

@@ -40,6 +40,11 @@ function rulesetFromFile(file: string): ChosenRuleset {
 
 /** `rules.json line 12, column 31 (combinations[2].expression, combination "3", character 14): message` */
 export function describeRulesetProblem(file: string, text: string, p: Problem): string {
+  if (p.kind === "input-limit" && p.place.path === undefined) {
+    // Beyond the size or nesting limit: the place is in the message, found without reading the text as a tree.
+    const at = / at line (\d+), column (\d+)$/.exec(p.message);
+    return at ? `${file} line ${at[1]}, column ${at[2]}: ${p.message.slice(0, at.index)}` : `${file}: ${p.message}`;
+  }
   if (p.kind === "ruleset-json") {
     const at = syntaxErrorOffset(text);
     if (at === null) return `${file}: ${p.message}`;

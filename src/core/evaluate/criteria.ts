@@ -1,26 +1,28 @@
 /**
- * Criteria for governing rows, written as text:
- *
- *   criterion := ("max" | "min") expr      max V, min N, max |M|, max N/2000 + M/350
- *   expr      := term (("+" | "-") term)*
- *   term      := unary (("*" | "/") unary)*
- *   unary     := "-" unary | primary
- *   primary   := number | component | "(" expr ")" | "|" expr "|" | "abs" primary
- *   component := a name (V, Mx) or any header in square brackets ([M top], [C1 / 0.5])
+ * Criteria for governing rows, written as text: "max V", "min N", "max |M|",
+ * "max N/2000 + M/350", "max sqrt(Vx^2 + Vy^2)", "max abs(T) / 120 + abs(V) / 95",
+ * "max(V)", "max(V, N)". They are read by the expression language's one parser
+ * (grammar in src/core/expression/parser.ts) and valued by its one evaluator.
  *
  * A criterion that is linear in the components (or the absolute value of one,
- * maximised) is found exactly without listing rows; any other is evaluated on
- * every row, within the row limit.
+ * maximised) is found exactly without listing rows; any other (sqrt, ^,
+ * max(a, b), a product of components) is evaluated on every row, within the
+ * row limit. A row where it has no value (a division by zero, the square root
+ * of a negative number) is refused with the row and the character.
  */
-import { fail, ok, problem, type Result } from "../problems.js";
+import type { Arith } from "../expression/ast.js";
+import { parseCriterionText, type ComponentNames } from "../expression/criterion.js";
+import { evaluateArith, type ArithEnvironment, type ArithFault } from "../expression/evaluate.js";
+import { fail, ok, problem, type Problem, type Result } from "../problems.js";
 import { nearest } from "../text/nearest.js";
 
-export type CriterionExpr =
-  | { kind: "number"; value: number }
-  | { kind: "component"; index: number }
-  | { kind: "negate"; operand: CriterionExpr }
-  | { kind: "abs"; operand: CriterionExpr }
-  | { kind: "binary"; op: "+" | "-" | "*" | "/"; left: CriterionExpr; right: CriterionExpr };
+export { criterionNames } from "../expression/criterion.js";
+
+/** A criterion's expression: the arithmetic, and the index of the component each of its names reads. */
+export interface CriterionExpr {
+  tree: Arith;
+  components: ReadonlyMap<string, number>;
+}
 
 export interface Affine {
   weights: Map<number, number>;
@@ -37,152 +39,79 @@ export interface Criterion {
   absLinear: Affine | null;
 }
 
-type Token = { kind: "number" | "name" | "op"; text: string; position: number };
-
 export function parseCriterion(text: string, components: readonly string[]): Result<Criterion> {
-  const tokens: Token[] = [];
-  const re = /\s*(?:(\d+(?:\.\d+)?|\.\d+)|(\[[^\]]*\])|([\p{L}_][\p{L}\p{N}_]*)|([-+*/()|]))/uy;
-  let i = 0;
-  while (i < text.length) {
-    if (/^\s*$/.test(text.slice(i))) break;
-    re.lastIndex = i;
-    const m = re.exec(text);
-    if (!m) {
-      const at = i + (text.slice(i).length - text.slice(i).trimStart().length);
-      return fail(problem("criterion-syntax", `unexpected character "${text[at]}" in criterion "${text}"`, { position: at + 1 }));
-    }
-    const position = m.index + m[0].length - (m[1] ?? m[2] ?? m[3] ?? m[4]).length + 1;
-    if (m[1]) tokens.push({ kind: "number", text: m[1], position });
-    else if (m[2]) tokens.push({ kind: "name", text: m[2].slice(1, -1).trim(), position });
-    else if (m[3]) tokens.push({ kind: "name", text: m[3], position });
-    else tokens.push({ kind: "op", text: m[4], position });
-    i = re.lastIndex;
-  }
-  let k = 0;
-  const stop = (message: string, position = tokens[k]?.position ?? text.length + 1) => {
-    throw new CriterionStop(message, position);
+  const indexes = new Map<string, number>();
+  components.forEach((c, k) => {
+    if (!indexes.has(c)) indexes.set(c, k);
+  });
+  const names: ComponentNames = {
+    indexOf: (name) => indexes.get(name),
+    unknown: (name) => {
+      const guess = nearest(name, components);
+      return `"${name}" is not a component of the case table${guess ? `; did you mean "${guess}"?` : ""} (components: ${components.join(", ")}; write names with spaces in [brackets])`;
+    },
   };
-  const peek = () => tokens[k];
-  const isOp = (op: string) => tokens[k]?.kind === "op" && tokens[k].text === op;
-
-  const primary = (): CriterionExpr => {
-    const t = peek();
-    if (!t) return stop(`criterion "${text}" ends where a value is expected`);
-    if (t.kind === "number") {
-      k++;
-      return { kind: "number", value: Number(t.text) };
-    }
-    if (t.kind === "name" && t.text.toLowerCase() === "abs" && !components.includes(t.text)) {
-      k++;
-      return { kind: "abs", operand: primary() };
-    }
-    if (t.kind === "name") {
-      k++;
-      const index = components.indexOf(t.text);
-      if (index < 0) {
-        const guess = nearest(t.text, components);
-        stop(`"${t.text}" is not a component of the case table${guess ? `; did you mean "${guess}"?` : ""} (components: ${components.join(", ")}; write names with spaces in [brackets])`, t.position);
-      }
-      return { kind: "component", index };
-    }
-    if (isOp("(")) {
-      k++;
-      const e = expr();
-      if (!isOp(")")) stop('expected ")"');
-      k++;
-      return e;
-    }
-    if (isOp("|")) {
-      k++;
-      const e = expr();
-      if (!isOp("|")) stop('expected a closing "|"');
-      k++;
-      return { kind: "abs", operand: e };
-    }
-    return stop(`unexpected "${t.text}"`);
-  };
-  const unary = (): CriterionExpr => {
-    if (isOp("-")) {
-      k++;
-      return { kind: "negate", operand: unary() };
-    }
-    return primary();
-  };
-  const term = (): CriterionExpr => {
-    let left = unary();
-    while (isOp("*") || isOp("/")) {
-      const op = tokens[k++].text as "*" | "/";
-      left = { kind: "binary", op, left, right: unary() };
-    }
-    return left;
-  };
-  const expr = (): CriterionExpr => {
-    let left = term();
-    while (isOp("+") || isOp("-")) {
-      const op = tokens[k++].text as "+" | "-";
-      left = { kind: "binary", op, left, right: term() };
-    }
-    return left;
-  };
-
-  try {
-    const first = tokens[k];
-    const sense = first?.kind === "name" ? first.text.toLowerCase() : "";
-    if (sense !== "max" && sense !== "min") {
-      stop(`a criterion starts with max or min, e.g. "max V" or "min N"; found "${first?.text ?? ""}"`, first?.position ?? 1);
-    }
-    k++;
-    const e = expr();
-    if (k < tokens.length) stop(`unexpected "${tokens[k].text}" after the criterion's expression`);
-    const linear = affine(e);
-    const absLinear = sense === "max" && e.kind === "abs" ? affine(e.operand) : null;
-    return ok({ text: text.trim(), sense: sense as "max" | "min", expr: e, linear, absLinear });
-  } catch (error) {
-    if (error instanceof CriterionStop) return fail(problem("criterion-syntax", error.message, { position: error.position, header: text }));
-    throw error;
-  }
-}
-
-class CriterionStop extends Error {
-  constructor(
-    message: string,
-    readonly position: number,
-  ) {
-    super(message);
-  }
+  const parsed = parseCriterionText(text, names);
+  if (!parsed.ok) return fail(problem("criterion-syntax", parsed.error.message, { position: parsed.error.position, header: text }));
+  const { sense, expr: tree, components: reads } = parsed.criterion;
+  const expr: CriterionExpr = { tree, components: reads };
+  const linear = affine(expr);
+  // Brackets leave no node of their own, so "max (|M|)" is the absolute value too.
+  const absLinear = sense === "max" && tree.kind === "call" && tree.fn === "abs" ? affine({ tree: tree.args[0], components: reads }) : null;
+  return ok({ text: text.trim(), sense, expr, linear, absLinear });
 }
 
 /** The expression as constant + Σ weight·component, or null if it is not linear. */
 export function affine(e: CriterionExpr): Affine | null {
-  switch (e.kind) {
-    case "number":
-      return { weights: new Map(), constant: e.value };
-    case "component":
-      return { weights: new Map([[e.index, 1]]), constant: 0 };
-    case "negate": {
-      const a = affine(e.operand);
-      return a && scale(a, -1);
-    }
-    case "abs":
-      return null;
-    case "binary": {
-      const l = affine(e.left);
-      const r = affine(e.right);
-      if (!l || !r) return null;
-      switch (e.op) {
-        case "+":
-          return add(l, r, 1);
-        case "-":
-          return add(l, r, -1);
-        case "*":
-          if (l.weights.size === 0) return scale(r, l.constant);
-          if (r.weights.size === 0) return scale(l, r.constant);
-          return null;
-        case "/":
-          return r.weights.size === 0 && r.constant !== 0 ? scale(l, 1 / r.constant) : null;
+  const walk = (a: Arith): Affine | null => {
+    switch (a.kind) {
+      case "number":
+        return { weights: new Map(), constant: a.value };
+      case "name":
+        return { weights: new Map([[e.components.get(a.name) as number, 1]]), constant: 0 };
+      case "negate": {
+        const x = walk(a.operand);
+        return x && scale(x, -1);
+      }
+      case "choice":
+        return null;
+      case "call":
+      case "binary": {
+        if (a.kind === "binary" && a.op !== "^") {
+          const l = walk(a.left);
+          const r = walk(a.right);
+          if (!l || !r) return null;
+          switch (a.op) {
+            case "+":
+              return add(l, r, 1);
+            case "-":
+              return add(l, r, -1);
+            case "*":
+              if (l.weights.size === 0) return scale(r, l.constant);
+              if (r.weights.size === 0) return scale(l, r.constant);
+              return null;
+            case "/":
+              return r.weights.size === 0 && r.constant !== 0 ? scale(l, 1 / r.constant) : null;
+          }
+        }
+        // Powers and functions are linear only when they read no component: a constant.
+        const v = constantValue(a);
+        return v === null ? null : { weights: new Map(), constant: v };
       }
     }
-  }
+  };
+  return walk(e.tree);
+}
+
+function constantValue(a: Arith): number | null {
+  let readsName = false;
+  const v = evaluateArith(a, {
+    name: () => {
+      readsName = true;
+      return 1;
+    },
+  });
+  return readsName || !v.ok ? null : v.value;
 }
 
 function scale(a: Affine, s: number): Affine {
@@ -195,30 +124,26 @@ function add(a: Affine, b: Affine, sign: number): Affine {
   return { weights, constant: a.constant + sign * b.constant };
 }
 
-/** The criterion's value for one row's component values. */
+function environment(e: CriterionExpr, values: ArrayLike<number>): ArithEnvironment {
+  return { name: (node) => values[e.components.get(node.name) as number] };
+}
+
+/**
+ * The criterion's value for one row's component values; NaN where it has none
+ * (a division by zero, the square root of a negative number), which
+ * `criterionFault` then says in words.
+ */
 export function evaluateCriterion(e: CriterionExpr, values: ArrayLike<number>): number {
-  switch (e.kind) {
-    case "number":
-      return e.value;
-    case "component":
-      return values[e.index];
-    case "negate":
-      return -evaluateCriterion(e.operand, values);
-    case "abs":
-      return Math.abs(evaluateCriterion(e.operand, values));
-    case "binary": {
-      const l = evaluateCriterion(e.left, values);
-      const r = evaluateCriterion(e.right, values);
-      switch (e.op) {
-        case "+":
-          return l + r;
-        case "-":
-          return l - r;
-        case "*":
-          return l * r;
-        case "/":
-          return l / r;
-      }
-    }
-  }
+  const v = evaluateArith(e.tree, environment(e, values));
+  return v.ok ? v.value : NaN;
+}
+
+/** Why a criterion has no value for a row, at the character where it fails. */
+export function criterionFault(criterion: Criterion, values: ArrayLike<number>, rowLabel: string): Problem {
+  const v = evaluateArith(criterion.expr.tree, environment(criterion.expr, values));
+  const fault: ArithFault = v.ok ? { kind: "too-large", position: 1, message: `the value ${v.value} is not a finite number` } : v.fault;
+  return problem("criterion-syntax", `criterion "${criterion.text}" has no value in row ${rowLabel}: ${fault.message}`, {
+    position: fault.position,
+    header: criterion.text,
+  });
 }

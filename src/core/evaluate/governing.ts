@@ -4,9 +4,9 @@
  * every component, a row that governs several criteria listed once.
  */
 import type { CaseTable } from "../cases/readCaseTable.js";
-import { fail, ok, problem, type Result } from "../problems.js";
+import { fail, ok, type Result } from "../problems.js";
 import type { Plan, RowRef } from "../plan/types.js";
-import { evaluateCriterion, parseCriterion, type Affine, type Criterion } from "./criteria.js";
+import { criterionFault, evaluateCriterion, parseCriterion, type Affine, type Criterion } from "./criteria.js";
 import { extremes } from "./extremes.js";
 import { DEFAULT_ROW_LIMIT, enumerateRows, noRows, rowLabel, rowValues, tooManyRows } from "./rows.js";
 
@@ -70,13 +70,7 @@ export function governing(plan: Plan, table: CaseTable, criteria: Criterion[], o
       const values = rowValues(plan, table, ref);
       for (let k = 0; k < exhaustive.length; k++) {
         const v = evaluateCriterion(exhaustive[k].expr, values);
-        if (!Number.isFinite(v)) {
-          return fail(
-            problem("criterion-syntax", `criterion "${exhaustive[k].text}" has no finite value in row ${rowLabel(plan, ref)} (a division by zero?)`, {
-              header: exhaustive[k].text,
-            }),
-          );
-        }
+        if (!Number.isFinite(v)) return fail(criterionFault(exhaustive[k], values, rowLabel(plan, ref)));
         const better = exhaustive[k].sense === "max" ? v > best[k].value : v < best[k].value;
         if (best[k].row === null || better) best[k] = { value: v, row: ref };
       }

@@ -1,6 +1,6 @@
 /**
- * The parsed form of a combination expression. Positions are 1-based characters
- * of the source expression; `end` is one past the last character.
+ * The parsed form of combination expressions and criteria. Positions are 1-based
+ * characters of the source text; `end` is one past the last character.
  */
 
 export interface Span {
@@ -8,13 +8,44 @@ export interface Span {
   end: number;
 }
 
-/** Arithmetic of a factor: numbers, parameters, symbol attributes, and "(a or b)" choices. */
+/** The functions of the arithmetic: abs(x), sqrt(x), max(a, b, …), min(a, b, …). */
+export const FUNCTION_NAMES = ["abs", "sqrt", "max", "min"] as const;
+export type FunctionName = (typeof FUNCTION_NAMES)[number];
+
+export type BinaryOperator = "+" | "-" | "*" | "/" | "^";
+
+/**
+ * Arithmetic, shared by a combination's factors and by criteria: numbers, names
+ * (parameters and symbol attributes in a factor, components in a criterion),
+ * signs, + - * / ^, functions, and, in factors only, "(a or b)" choices.
+ */
 export type Arith =
   | { kind: "number"; value: number; span: Span }
   | { kind: "name"; name: string; span: Span }
   | { kind: "negate"; operand: Arith; span: Span }
-  | { kind: "binary"; op: "+" | "-" | "*" | "/"; left: Arith; right: Arith; span: Span }
+  | { kind: "binary"; op: BinaryOperator; left: Arith; right: Arith; span: Span }
+  | { kind: "call"; fn: FunctionName; args: Arith[]; span: Span }
   | { kind: "choice"; options: Arith[]; span: Span };
+
+export type NameNode = Extract<Arith, { kind: "name" }>;
+export type ChoiceNode = Extract<Arith, { kind: "choice" }>;
+
+/** The nodes directly below one node, for walks that treat every operator alike. */
+export function operands(a: Arith): readonly Arith[] {
+  switch (a.kind) {
+    case "number":
+    case "name":
+      return [];
+    case "negate":
+      return [a.operand];
+    case "binary":
+      return [a.left, a.right];
+    case "call":
+      return a.args;
+    case "choice":
+      return a.options;
+  }
+}
 
 /** What a term's factor multiplies. */
 export type Body =
@@ -42,9 +73,7 @@ export interface Sum {
   span: Span;
 }
 
-export const num = (value: number, span: Span): Arith => ({ kind: "number", value, span });
-export const name = (n: string, span: Span): Arith => ({ kind: "name", name: n, span });
-export const binary = (op: "+" | "-" | "*" | "/", left: Arith, right: Arith): Arith => ({
+export const binary = (op: BinaryOperator, left: Arith, right: Arith): Arith => ({
   kind: "binary",
   op,
   left,

@@ -1,31 +1,69 @@
 /**
- * Parser for combination expressions as the codes print them. Our own recursive
- * descent; nothing is ever evaluated as JavaScript.
+ * The expression language: combinations as the codes print them, and criteria
+ * for governing rows, read by one lexer (lexer.ts) and one set of arithmetic
+ * rules (arithmeticParser.ts). Our own recursive descent; nothing is ever
+ * evaluated as JavaScript. This file reads combinations; criterion.ts reads
+ * criteria.
  *
  * Grammar (each rule with an example):
  *
- *   sum      := [sign] term (sign term)*          1.2D + 1.6L − 0.5W
- *   sign     := "+" | "-" | "±"                   "+-" and "-+" also mean ±: both ways
- *   term     := [factor ["*"]] body [mark]        0.5(Lr or S or R), rho*E!, (1.35 or 1.0)G
- *   factor   := fprimary (["*" | "/"] fprimary)*  1.5*psi0, 0.2SDS
- *   fprimary := number | value | "(" choice ")"   (1.2 + 0.2*SDS), (1.35 or 1.0)
- *   choice   := arith ("or" arith)*               1.35 or 1.0: one of them, each in turn
- *   arith    := product (("+" | "-") product)*    1.2 + 0.2*SDS
- *   product  := unary (["*" | "/"] unary)*        0.2SDS — juxtaposition multiplies
- *   unary    := "-" unary | fprimary
- *   body     := symbol                            D, Lr, W
- *             | "(" sum ("or" sum)* ")"           (Lr or S or R), (L or 0.5W), (0.6W)
- *             | "lead" "(" symbol ("," symbol)* ")"   lead(Q, S, W): each leads in turn
- *             | "others"                          the lead list's symbols that do not lead
- *   mark     := "!" | "?"                         ! never left out, ? may be left out
+ * Arithmetic, shared by factors and criteria
+ *   arith     := product (("+" | "-") product)*     1.2 + 0.2*SDS, N/2000 + M/350
+ *   product   := unary (("*" | "/") unary)*         0.2*SDS, abs(T) / 120
+ *              | unary unary…                        0.2SDS — in a factor, a value written right
+ *                                                    after another multiplies it
+ *   unary     := "-" unary | power                  -0.2, -V^2 (that is −(V²))
+ *   power     := primary ["^" unary]                Vx^2, 2^-1, 2^3^2 (that is 2^9)
+ *   primary   := number                             1.2, .5 (a decimal point, never a comma)
+ *              | name                               SDS, psi0 (factor); V, [C1 top] (criterion)
+ *              | call                               sqrt(Vx^2 + Vy^2)
+ *              | "(" arith ")"                       (1.2 + 0.2*SDS)
+ *              | "|" arith "|"                       |M| — the same as abs(M)
+ *   call      := function "(" arith ("," arith)* ")"  abs(T), sqrt(x), max(a, b), min(a, b, c)
+ *   function  := "abs" | "sqrt" | "max" | "min"     in any letter case; max and min take two or more
  *
- * `value` is a parameter, a value set by a choice parameter, or a symbol attribute
- * (psi0): which names are symbols and which are values comes from the ruleset, so
- * "(…)" is a factor when it holds no load symbol and a body when it does.
+ * Combinations
+ *   sum       := [sign] term (sign term)*           1.2D + 1.6L − 0.5W
+ *   sign      := "+" | "-" | "±"                    "+-" and "-+" also mean ±: both ways
+ *   term      := [factor ["*"]] body [mark]         0.5(Lr or S or R), rho*E!, (1.35 or 1.0)G
+ *   factor    := fvalue (["*" | "/"] fvalue)*       1.5*psi0, 0.2SDS, 0.5sqrt(SDS)
+ *   fvalue    := power, without a leading sign      (1.2 + 0.2*SDS), SDS^0.5
+ *   choice    := arith ("or" arith)*                (1.35 or 1.0): one of them, each in turn —
+ *                                                    what "(" … ")" holds inside a factor
+ *   body      := symbol                            D, Lr, W
+ *              | "(" sum ("or" sum)* ")"           (Lr or S or R), (L or 0.5W), (0.6W)
+ *              | "lead" "(" symbol ("," symbol)* ")"   lead(Q, S, W): each leads in turn
+ *              | "others"                          the lead list's symbols that do not lead
+ *   mark      := "!" | "?"                         ! never left out, ? may be left out
+ *
+ * Criteria (criterion.ts)
+ *   criterion := sense arith                        max V, min N, max |M|, max N/2000 + M/350
+ *              | sense "(" arith ")" …             max(V): the sense with brackets
+ *              | ("max" | "min") "(" arith ("," arith)+ ")" …   max(V, N): the largest of V and N
+ *   sense     := "max" | "min"                      in any letter case
+ *   name      := a component: V, Mx, or any header in square brackets, [M top], [C1 / 0.5]
+ *   In a criterion nothing is multiplied without "*", and "or" has no place.
+ *
+ * In a factor a name is a parameter, a value set by a choice parameter, or a
+ * symbol attribute (psi0): which names are symbols and which are values comes
+ * from the ruleset, so "(…)" is a factor when it holds no load symbol and a body
+ * when it does. A name the ruleset or the table defines is that name; otherwise
+ * a function word followed by "(" is the function.
+ *
+ * Limits (src/core/limits.ts): an expression or criterion holds at most
+ * 2,000 characters and nests brackets, bars, functions, signs and powers at
+ * most 32 deep; the choices of one expression's factors can be taken at most
+ * 1,000 ways together. Arithmetic on numbers alone that has no value (1/0,
+ * sqrt(-1)) is refused where it is written.
  */
-import type { Arith, Body, Presence, Span, Sum, Term, TermSign } from "./ast.js";
-import { binary } from "./ast.js";
-import { lex, type Token, type TokenKind } from "./lexer.js";
+import { binary, operands, type Arith, type Body, type Presence, type Span, type Sum, type Term, type TermSign } from "./ast.js";
+import { ArithmeticParser, Stop, type ParseFailure } from "./arithmeticParser.js";
+import { constantFault } from "./evaluate.js";
+import { lex, type Token } from "./lexer.js";
+import { FUNCTION_NAMES } from "./ast.js";
+import { countText, LIMITS } from "../limits.js";
+
+export type { ParseFailure } from "./arithmeticParser.js";
 
 export type NameKind = "symbol" | "value" | "unknown";
 
@@ -35,32 +73,34 @@ export interface NameClassifier {
   values(): readonly string[];
 }
 
-export const KEYWORDS = ["or", "lead", "others"] as const;
-
-export interface ParseFailure {
-  position: number;
-  message: string;
-  kind: "syntax" | "unknown-name";
-}
+/** Words of the language, which cannot name a symbol, parameter or value. */
+export const KEYWORDS = ["or", "lead", "others", ...FUNCTION_NAMES] as const;
 
 export type ParseResult = { ok: true; sum: Sum } | { ok: false; error: ParseFailure };
 
-class Stop extends Error {
-  constructor(readonly failure: ParseFailure) {
-    super(failure.message);
-  }
+/** Text over the stated length, or null: checked before anything else is read. */
+export function lengthFailure(text: string, what: "expression" | "criterion"): ParseFailure | null {
+  if (text.length <= LIMITS.expressionCharacters) return null;
+  return {
+    position: LIMITS.expressionCharacters + 1,
+    message: `the ${what} has ${countText(text.length)} characters; at most ${countText(LIMITS.expressionCharacters)} are read`,
+    kind: "syntax",
+  };
 }
 
 export function parseExpression(text: string, names: NameClassifier): ParseResult {
+  const tooLong = lengthFailure(text, "expression");
+  if (tooLong) return { ok: false, error: tooLong };
   const lexed = lex(text);
   if (!lexed.ok) return { ok: false, error: { position: lexed.position, message: lexed.message, kind: "syntax" } };
   if (lexed.tokens.length === 1) {
     return { ok: false, error: { position: 1, message: "the expression is empty", kind: "syntax" } };
   }
-  const parser = new Parser(lexed.tokens, names);
+  const parser = new CombinationParser(lexed.tokens, names);
   try {
     const sum = parser.sum(true);
     parser.expectEnd();
+    checkFactors(sum);
     return { ok: true, sum };
   } catch (e) {
     if (e instanceof Stop) return { ok: false, error: e.failure };
@@ -68,36 +108,79 @@ export function parseExpression(text: string, names: NameClassifier): ParseResul
   }
 }
 
-class Parser {
-  private i = 0;
-  constructor(
-    private readonly tokens: Token[],
-    private readonly names: NameClassifier,
-  ) {}
+/** Arithmetic on numbers alone that has no value, and more ways to take the choices than the stated limit. */
+function checkFactors(sum: Sum): void {
+  let ways = 1;
+  const visitChoices = (a: Arith) => {
+    if (a.kind === "choice") {
+      ways *= a.options.length;
+      if (ways > LIMITS.factorChoices) {
+        throw new Stop({ position: a.span.start, message: `the factors' "(a or b)" choices can be taken more than ${countText(LIMITS.factorChoices)} ways together`, kind: "syntax" });
+      }
+    }
+    operands(a).forEach(visitChoices);
+  };
+  const visit = (s: Sum) => {
+    for (const term of s.terms) {
+      if (term.factor) {
+        const fault = constantFault(term.factor);
+        if (fault) throw new Stop({ position: fault.position, message: fault.message, kind: "syntax" });
+        visitChoices(term.factor);
+      }
+      if (term.body.kind === "group") term.body.alternatives.forEach(visit);
+    }
+  };
+  visit(sum);
+}
 
-  private get t(): Token {
-    return this.tokens[this.i];
+class CombinationParser extends ArithmeticParser {
+  constructor(
+    tokens: Token[],
+    private readonly names: NameClassifier,
+  ) {
+    super(tokens);
   }
-  private at(kind: TokenKind): boolean {
-    return this.t.kind === kind;
+
+  protected isDefinedName(text: string): boolean {
+    return this.names.kind(text) !== "unknown";
   }
-  private atWord(word: string): boolean {
-    return this.t.kind === "name" && this.t.text === word;
+
+  /** Inside a factor's brackets a value written right after another multiplies it: (0.2SDS). */
+  protected juxtaposes(): boolean {
+    return (this.at("number") || this.at("name") || this.at("open")) && !this.atWord("or");
   }
-  private next(): Token {
-    const token = this.t;
-    if (token.kind !== "end") this.i++;
-    return token;
+
+  protected nameNode(token: Token): Arith {
+    if (token.kind === "quoted") {
+      this.stop(token.position, `square brackets name a component in a criterion; a combination writes its symbols and values without them ("${token.text}")`);
+    }
+    if (token.text === "or") this.stop(token.position, '"or" separates alternatives inside brackets: write (a or b)');
+    if (token.text === "lead" || token.text === "others") this.stop(token.position, `"${token.text}" cannot stand inside a factor`);
+    const kind = this.names.kind(token.text);
+    if (kind === "unknown") this.unknownName(token);
+    if (kind === "symbol") {
+      if (this.bracketDepth > 0) {
+        this.stop(token.position, `the load symbol "${token.text}" cannot stand inside a factor's brackets; write the factor, then the symbol: (1.2 + 0.2*SDS)D`);
+      }
+      this.stop(token.position, `expected a number or parameter, found the load symbol "${token.text}"`);
+    }
+    this.next();
+    return { kind: "name", name: token.text, span: this.spanOf(token) };
   }
-  private stop(position: number, message: string, kind: ParseFailure["kind"] = "syntax"): never {
-    throw new Stop({ position, message, kind });
+
+  /** "(" choice ")" in a factor: one value, or alternatives each taken in turn. */
+  protected override bracketContents(): Arith {
+    const start = this.t.position;
+    const options: Arith[] = [this.arith()];
+    while (this.atWord("or")) {
+      this.next();
+      options.push(this.arith());
+    }
+    return options.length === 1 ? options[0] : { kind: "choice", options, span: { start, end: this.endOfPrevious() } };
   }
-  private describe(token: Token): string {
-    return token.kind === "end" ? "the end of the expression" : `"${token.text}"`;
-  }
-  private endOfPrevious(): number {
-    const prev = this.tokens[this.i - 1];
-    return prev ? prev.position + prev.text.length : 1;
+
+  protected override missingValue(token: Token): string {
+    return `expected a number, a parameter or a load symbol, found ${this.describe(token)}`;
   }
 
   expectEnd(): void {
@@ -167,7 +250,7 @@ class Parser {
     const token = this.t;
     if (token.kind === "name") {
       if (token.text === "lead" || token.text === "others") return true;
-      if (token.text === "or") return false;
+      if (token.text === "or" || this.atCall()) return false;
       const kind = this.names.kind(token.text);
       if (kind === "unknown") this.unknownName(token);
       return kind === "symbol";
@@ -192,95 +275,30 @@ class Parser {
     return false;
   }
 
-  /** factor := fprimary (["*" | "/"] fprimary)* ["*"] — ends where the body starts. */
+  /** factor := fvalue (["*" | "/"] fvalue)* ["*"] — ends where the body starts. */
   private factor(): Arith {
-    let left = this.factorPrimary();
+    let left = this.factorValue();
     for (;;) {
       if (this.at("times")) {
         this.next();
         if (this.atBodyStart()) return left;
-        left = binary("*", left, this.factorPrimary());
+        left = binary("*", left, this.factorValue());
       } else if (this.at("divide")) {
         this.next();
-        left = binary("/", left, this.factorPrimary());
+        left = binary("/", left, this.factorValue());
       } else if (!this.atBodyStart() && !this.atWord("or") && (this.at("number") || this.at("name") || this.at("open"))) {
-        left = binary("*", left, this.factorPrimary());
+        left = binary("*", left, this.factorValue());
       } else {
         return left;
       }
     }
   }
 
-  /** fprimary := number | value | "(" choice ")" */
-  private factorPrimary(): Arith {
+  /** fvalue := power, without a leading sign (signs go between terms). */
+  private factorValue(): Arith {
     const token = this.t;
-    if (token.kind === "number") {
-      this.next();
-      return { kind: "number", value: token.value as number, span: this.spanOf(token) };
-    }
-    if (token.kind === "name") {
-      if (token.text === "or") this.stop(token.position, '"or" separates alternatives inside brackets: write (a or b)');
-      const kind = this.names.kind(token.text);
-      if (kind === "unknown") this.unknownName(token);
-      if (kind === "symbol") this.stop(token.position, `expected a number or parameter, found the load symbol "${token.text}"`);
-      this.next();
-      return { kind: "name", name: token.text, span: this.spanOf(token) };
-    }
-    if (token.kind === "open") {
-      this.next();
-      const options: Arith[] = [this.arith()];
-      while (this.atWord("or")) {
-        this.next();
-        options.push(this.arith());
-      }
-      this.close(token);
-      const span = { start: token.position, end: this.endOfPrevious() };
-      return options.length === 1 ? { ...options[0], span } : { kind: "choice", options, span };
-    }
     if (token.kind === "minus") this.stop(token.position, 'a sign goes between terms; write "- 0.2W", or put a negative factor in brackets: (-0.2)W');
-    this.stop(token.position, `expected a number, a parameter or a load symbol, found ${this.describe(token)}`);
-  }
-
-  /** arith := product (("+" | "-") product)* */
-  private arith(): Arith {
-    let left = this.product();
-    while (this.at("plus") || this.at("minus")) {
-      const op = this.next().kind === "plus" ? "+" : "-";
-      left = binary(op, left, this.product());
-    }
-    if (this.at("plusminus")) this.stop(this.t.position, '"±" marks a term acting both ways; it cannot stand inside a factor');
-    return left;
-  }
-
-  /** product := unary (["*" | "/"] unary)* */
-  private product(): Arith {
-    let left = this.unary();
-    for (;;) {
-      if (this.at("times") || this.at("divide")) {
-        const op = this.next().kind === "times" ? "*" : "/";
-        left = binary(op, left, this.unary());
-      } else if ((this.at("number") || this.at("name") || this.at("open")) && !this.atWord("or")) {
-        left = binary("*", left, this.unary());
-      } else {
-        return left;
-      }
-    }
-  }
-
-  private unary(): Arith {
-    if (this.at("minus")) {
-      const token = this.next();
-      const operand = this.unary();
-      return { kind: "negate", operand, span: { start: token.position, end: operand.span.end } };
-    }
-    const token = this.t;
-    if (token.kind === "name" && token.text !== "or" && this.names.kind(token.text) === "symbol") {
-      this.stop(token.position, `the load symbol "${token.text}" cannot stand inside a factor's brackets; write the factor, then the symbol: (1.2 + 0.2*SDS)D`);
-    }
-    if (token.kind === "name" && (token.text === "lead" || token.text === "others")) {
-      this.stop(token.position, `"${token.text}" cannot stand inside a factor`);
-    }
-    return this.factorPrimary();
+    return this.power();
   }
 
   /** body := symbol | "(" sum ("or" sum)* ")" | lead(...) | others */
@@ -289,7 +307,7 @@ class Parser {
     if (token.kind === "name" && token.text === "lead") {
       this.next();
       const open = this.t;
-      if (!this.at("open")) this.stop(open.position, 'write the leading actions in brackets: lead(Q, S, W)');
+      if (!this.at("open")) this.stop(open.position, "write the leading actions in brackets: lead(Q, S, W)");
       this.next();
       const symbols: { name: string; span: Span }[] = [];
       for (;;) {
@@ -307,7 +325,7 @@ class Parser {
         }
         break;
       }
-      this.close(open);
+      this.closeBody(open);
       return { kind: "lead", symbols, span: { start: token.position, end: this.endOfPrevious() } };
     }
     if (token.kind === "name" && token.text === "others") {
@@ -320,16 +338,19 @@ class Parser {
     }
     // "(" sum ("or" sum)* ")"
     this.next();
-    const alternatives: Sum[] = [this.sum(false)];
-    while (this.atWord("or")) {
-      this.next();
-      alternatives.push(this.sum(false));
-    }
-    this.close(token);
-    return { kind: "group", alternatives, span: { start: token.position, end: this.endOfPrevious() } };
+    return this.nest(token.position, () => {
+      const alternatives: Sum[] = [this.sum(false)];
+      while (this.atWord("or")) {
+        this.next();
+        alternatives.push(this.sum(false));
+      }
+      this.closeBody(token);
+      return { kind: "group", alternatives, span: { start: token.position, end: this.endOfPrevious() } };
+    });
   }
 
-  private close(open: Token): void {
+  /** The ")" of a body: an unclosed one is shown at its "(". */
+  private closeBody(open: Token): void {
     if (this.at("close")) {
       this.next();
       return;
@@ -341,12 +362,8 @@ class Parser {
   private sourceOf(span: Span): string {
     return this.tokens
       .filter((t) => t.position >= span.start && t.position < span.end && t.kind !== "end")
-      .map((t) => t.text)
+      .map((t) => (t.kind === "quoted" ? `[${t.text}]` : t.text))
       .join("");
-  }
-
-  private spanOf(token: Token): Span {
-    return { start: token.position, end: token.position + token.text.length };
   }
 
   private unknownName(token: Token): never {

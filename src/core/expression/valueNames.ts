@@ -24,6 +24,9 @@ function arithNames(a: Arith, out: Set<string>): void {
     case "choice":
       for (const o of a.options) arithNames(o, out);
       break;
+    case "call":
+      for (const x of a.args) arithNames(x, out);
+      break;
     case "number":
       break;
   }

@@ -4,6 +4,7 @@
  * factor written back as text for explanations.
  */
 import type { Arith } from "../expression/ast.js";
+import { evaluateArith } from "../expression/evaluate.js";
 import { fail, ok, problem, type Result } from "../problems.js";
 import type { LoadSymbol } from "../ruleset/model.js";
 
@@ -31,6 +32,9 @@ export function choiceNodes(a: Arith | null, out: Arith[] = []): Arith[] {
     case "binary":
       choiceNodes(a.left, out);
       choiceNodes(a.right, out);
+      break;
+    case "call":
+      for (const x of a.args) choiceNodes(x, out);
       break;
     case "number":
     case "name":
@@ -72,53 +76,33 @@ function reachedKey(a: Arith | null, m: ChoiceAssignment): string {
       return reachedKey(a.operand, m);
     case "binary":
       return `${reachedKey(a.left, m)},${reachedKey(a.right, m)}`;
+    case "call":
+      return a.args.map((x) => reachedKey(x, m)).join(",");
     default:
       return "";
   }
 }
 
-/** The factor's value for one symbol; a division by zero, a value that is not finite or a missing parameter is a problem at its character. */
+/** The factor's value for one symbol; arithmetic without a finite value or a missing parameter is a problem at its character. */
 export function evaluateFactor(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope: FactorScope): Result<number> {
-  const value = evaluate(a, choice, symbol, scope);
-  if (value.ok && !Number.isFinite(value.value)) {
+  // The expression language's one evaluator; names read the symbol's attributes, then the parameters.
+  // A name without a value is kept as the problem to give, and reads NaN so the evaluation finishes.
+  let unnamed: Result<number> | null = null;
+  const result = evaluateArith(a, {
+    name: (n) => {
+      const v = valueOf(n.name, n.span.start, symbol, scope);
+      if (v.ok) return v.value;
+      unnamed ??= v;
+      return NaN;
+    },
+    option: (node) => choice.get(node) ?? 0,
+  });
+  if (unnamed) return unnamed;
+  if (!result.ok) return fail(problem("expression-not-finite", `${result.fault.message} in the factor on ${symbol.name}`, { position: result.fault.position }));
+  if (!Number.isFinite(result.value)) {
     return fail(problem("expression-not-finite", `the factor on ${symbol.name} is not a finite number (a division by zero?)`, { position: a.span.start }));
   }
-  return value;
-}
-
-function evaluate(a: Arith, choice: ChoiceAssignment, symbol: LoadSymbol, scope: FactorScope): Result<number> {
-  switch (a.kind) {
-    case "number":
-      return ok(a.value);
-    case "name":
-      return valueOf(a.name, a.span.start, symbol, scope);
-    case "negate": {
-      const operand = evaluate(a.operand, choice, symbol, scope);
-      return operand.ok ? ok(-operand.value) : operand;
-    }
-    case "binary": {
-      const left = evaluate(a.left, choice, symbol, scope);
-      if (!left.ok) return left;
-      const right = evaluate(a.right, choice, symbol, scope);
-      if (!right.ok) return right;
-      const l = left.value;
-      const r = right.value;
-      switch (a.op) {
-        case "+":
-          return ok(l + r);
-        case "-":
-          return ok(l - r);
-        case "*":
-          return ok(l * r);
-        case "/":
-          if (r === 0) return fail(problem("expression-not-finite", `division by zero in the factor on ${symbol.name}`, { position: a.right.span.start }));
-          return ok(l / r);
-      }
-    }
-    // falls through: every binary operator returns above
-    case "choice":
-      return evaluate(a.options[choice.get(a) ?? 0], choice, symbol, scope);
-  }
+  return ok(result.value);
 }
 
 function valueOf(name: string, position: number, symbol: LoadSymbol, scope: FactorScope): Result<number> {
@@ -137,7 +121,7 @@ export function factorText(a: Arith, choice: ChoiceAssignment): string {
   return render(a, choice, 0);
 }
 
-const PRECEDENCE = { "+": 1, "-": 1, "*": 2, "/": 2 } as const;
+const PRECEDENCE = { "+": 1, "-": 1, "*": 2, "/": 2, "^": 4 } as const;
 
 function render(a: Arith, choice: ChoiceAssignment, parent: number): string {
   switch (a.kind) {
@@ -146,13 +130,19 @@ function render(a: Arith, choice: ChoiceAssignment, parent: number): string {
     case "name":
       return a.name;
     case "negate":
-      return `-${render(a.operand, choice, 3)}`;
+      // A negative base of a power takes brackets: (-2) ^ 2.
+      return parent > 3 ? `(-${render(a.operand, choice, 3)})` : `-${render(a.operand, choice, 3)}`;
     case "choice":
       return render(a.options[choice.get(a) ?? 0], choice, parent);
+    case "call":
+      return `${a.fn}(${a.args.map((x) => render(x, choice, 0)).join(", ")})`;
     case "binary": {
       const p = PRECEDENCE[a.op];
       const op = a.op === "*" ? "×" : a.op;
-      const text = `${render(a.left, choice, p)} ${op} ${render(a.right, choice, p + (a.op === "-" || a.op === "/" ? 1 : 0))}`;
+      // ^ groups from the right (2 ^ 3 ^ 2 is 2 ^ 9), the others from the left.
+      const left = render(a.left, choice, p + (a.op === "^" ? 1 : 0));
+      const right = render(a.right, choice, a.op === "^" ? 3 : p + (a.op === "-" || a.op === "/" ? 1 : 0));
+      const text = `${left} ${op} ${right}`;
       return p < parent ? `(${text})` : text;
     }
   }

@@ -339,6 +339,9 @@ function attributeNotes(stack: StackEntry[], symbol: LoadSymbol, ctx: Context): 
       case "choice":
         a.options.forEach(visit);
         break;
+      case "call":
+        a.args.forEach(visit);
+        break;
       case "number":
         break;
     }

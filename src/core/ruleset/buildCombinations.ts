@@ -99,6 +99,9 @@ function structureProblems(sum: Sum, symbols: ReadonlyMap<string, LoadSymbol>, v
       case "choice":
         for (const o of a.options) attributesIn(o, acc);
         break;
+      case "call":
+        for (const x of a.args) attributesIn(x, acc);
+        break;
     }
     return acc;
   };

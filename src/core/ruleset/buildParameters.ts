@@ -59,7 +59,7 @@ function choiceParameter(name: string, p: ChoiceParameterFile, path: (string | n
       );
     }
   }
-  if (!p.choices[p.default]) {
+  if (!Object.hasOwn(p.choices, p.default)) {
     problems.push(
       problem("parameter-not-allowed", `default "${p.default}" is not one of the choices (${entries.map(([c]) => c).join(", ")})`, {
         path: [...path, "default"],

@@ -4,7 +4,9 @@
  * error once JSON.parse has refused the text; and a field written twice, which
  * JSON.parse accepts silently (keeping the last), is found the same way.
  */
-import { parse, parseTree, printParseErrorCode, type Node, type ParseError } from "jsonc-parser";
+import { parse, printParseErrorCode, visit, type ParseError } from "jsonc-parser";
+import { LIMITS } from "../limits.js";
+import { lineAndColumn, nestingBeyond } from "./jsonLimits.js";
 
 const WORDS: Record<string, string> = {
   InvalidSymbol: "unexpected text",
@@ -25,6 +27,8 @@ const WORDS: Record<string, string> = {
 /** "a "," is expected at line 3, column 9", or the parser's own message when the scanner finds nothing. */
 export function jsonSyntaxError(text: string, fallback: string): string {
   if (text.trim() === "") return "the text is empty";
+  // The scanner reads nested values recursively: text beyond the nesting limit is refused before it (jsonLimits.ts).
+  if (nestingBeyond(text, LIMITS.jsonNesting) !== null) return fallback;
   const errors: ParseError[] = [];
   parse(text, errors, { disallowComments: true, allowTrailingComma: false, allowEmptyContent: false });
   const first = errors[0];
@@ -46,28 +50,27 @@ export interface DuplicateKey {
 
 /** Every field name written twice in the same object, with the path and place of the later one. */
 export function duplicateKeys(text: string): DuplicateKey[] {
-  const root = parseTree(text, [], { disallowComments: true, allowTrailingComma: false });
+  if (nestingBeyond(text, LIMITS.jsonNesting) !== null) return [];
   const out: DuplicateKey[] = [];
-  const walk = (node: Node, path: (string | number)[]) => {
-    if (node.type === "object") {
-      const seen = new Set<string>();
-      for (const property of node.children ?? []) {
-        const [keyNode, valueNode] = property.children ?? [];
-        if (!keyNode || typeof keyNode.value !== "string") continue;
-        const key = keyNode.value;
-        if (seen.has(key)) out.push({ path: [...path, key], key, offset: keyNode.offset, length: keyNode.length, ...lineAndColumn(text, keyNode.offset) });
+  // One set of names per open object; read as a stream of events, without building a tree (long files).
+  const open: Set<string>[] = [];
+  visit(
+    text,
+    {
+      onObjectBegin: () => {
+        open.push(new Set());
+      },
+      onObjectEnd: () => {
+        open.pop();
+      },
+      onObjectProperty: (key, offset, length, startLine, startCharacter, pathSupplier) => {
+        const seen = open[open.length - 1];
+        if (!seen) return;
+        if (seen.has(key)) out.push({ path: [...pathSupplier(), key], key, offset, length, line: startLine + 1, column: startCharacter + 1 });
         seen.add(key);
-        if (valueNode) walk(valueNode, [...path, key]);
-      }
-    } else if (node.type === "array") {
-      (node.children ?? []).forEach((child, i) => walk(child, [...path, i]));
-    }
-  };
-  if (root) walk(root, []);
+      },
+    },
+    { disallowComments: true, allowTrailingComma: false },
+  );
   return out;
-}
-
-function lineAndColumn(text: string, offset: number): { line: number; column: number } {
-  const before = text.slice(0, offset);
-  return { line: before.split("\n").length, column: offset - before.lastIndexOf("\n") };
 }

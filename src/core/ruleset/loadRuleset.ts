@@ -1,17 +1,24 @@
 /**
- * Reads a ruleset file (JSON text or an already-parsed object): JSON syntax,
- * then the schema (unknown fields refused), then the checks of buildRuleset.
+ * Reads a ruleset file (JSON text or an already-parsed object): the stated
+ * limits (size, nesting, members) and forbidden field names first, then JSON
+ * syntax, the schema (unknown fields refused), then the checks of buildRuleset.
+ * A ruleset is hostile input until these pass: nothing here recurses deeper
+ * than the nesting limit or copies a field named __proto__.
  */
+import { LIMITS } from "../limits.js";
 import { fail, problem, type Result } from "../problems.js";
 import { buildRuleset } from "./buildRuleset.js";
 import type { Ruleset } from "./model.js";
 import { rulesetSchema } from "./schema.js";
 import { schemaProblems } from "./schemaProblems.js";
 import { duplicateKeys, jsonSyntaxError } from "./jsonSyntax.js";
+import { jsonTextProblem, jsonValueProblems } from "./jsonLimits.js";
 
 export function loadRuleset(input: string | unknown): Result<Ruleset> {
   let data: unknown = input;
   if (typeof input === "string") {
+    const limit = jsonTextProblem(input, { what: "ruleset file", characters: LIMITS.rulesetCharacters });
+    if (limit) return fail(limit);
     try {
       data = JSON.parse(input);
     } catch (e) {
@@ -22,6 +29,8 @@ export function loadRuleset(input: string | unknown): Result<Ruleset> {
       return fail(...twice.map((d) => problem("ruleset-json", `field "${d.key}" is written twice in one object (line ${d.line}, column ${d.column}); JSON keeps only the last, so say which is meant`, { path: d.path })));
     }
   }
+  const unsafe = jsonValueProblems(data, { members: LIMITS.rulesetMembers });
+  if (unsafe.length > 0) return fail(...unsafe);
   const parsed = rulesetSchema.safeParse(data);
   if (!parsed.success) return fail(...schemaProblems(parsed.error.issues, rulesetSchema, data));
   return buildRuleset(parsed.data, "file");

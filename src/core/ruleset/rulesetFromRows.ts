@@ -7,6 +7,7 @@
 import { isBlank, cellText, type Cell } from "../cells.js";
 import { KEYWORDS } from "../expression/parser.js";
 import { lex } from "../expression/lexer.js";
+import { FORBIDDEN_KEYS } from "../limits.js";
 import { fail, problem, type Problem, type Result } from "../problems.js";
 import { buildRuleset } from "./buildRuleset.js";
 import { SYMBOL_CATALOGUE } from "./catalogue.js";
@@ -48,7 +49,12 @@ export function rulesetFromRows(rows: Cell[][]): Result<Ruleset> {
     }
     for (const t of tokens.tokens) {
       if (t.kind !== "name" || (KEYWORDS as readonly string[]).includes(t.text)) continue;
-      if (t.text in SYMBOL_CATALOGUE) used.add(t.text);
+      if (FORBIDDEN_KEYS.includes(t.text)) {
+        // A name becomes a field of the ruleset built here: never one that reaches a prototype.
+        problems.push(problem("input-forbidden-key", `"${t.text}" cannot name a load symbol or a parameter`, { row: r, column: expressionColumn, entry: id, position: t.position }));
+        continue;
+      }
+      if (Object.hasOwn(SYMBOL_CATALOGUE, t.text)) used.add(t.text);
       else parameterNames.add(t.text);
     }
     combinations.push({ id, expression, clause: clause === "" ? "(no clause given)" : clause });

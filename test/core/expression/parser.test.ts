@@ -36,6 +36,8 @@ function show(a: Arith | null): string {
       return `(${show(a.left)} ${a.op} ${show(a.right)})`;
     case "choice":
       return `{${a.options.map(show).join(" | ")}}`;
+    case "call":
+      return `${a.fn}(${a.args.map(show).join(", ")})`;
   }
 }
 

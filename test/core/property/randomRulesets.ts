@@ -2,7 +2,7 @@
  * Random rulesets and case tables for the property tests: expressions are
  * generated as text (so the parser is exercised too) from every construct of
  * the language — alternatives, factor pairs, parameters, attributes, signs,
- * both-ways terms, marks, lead/others — over symbols of every kind.
+ * both-ways terms, marks, lead/others, functions and powers — over symbols of every kind.
  */
 import fc from "fast-check";
 import { RULESET_FORMAT, type RulesetFile } from "../../../src/core/index.js";
@@ -22,7 +22,7 @@ export const SYMBOLS: RulesetFile["symbols"] = {
 const VARIABLE = ["L", "S", "W", "E", "T"];
 const ALL = Object.keys(SYMBOLS);
 
-const factorText = fc.constantFrom("", "", "1.2", "0.9*", "a*", "(1.35 or 0.9)", "(a + 0.2*b)", "(1 - b)", "0.5a ", "(a or 2.5)*");
+const factorText = fc.constantFrom("", "", "1.2", "0.9*", "a*", "(1.35 or 0.9)", "(a + 0.2*b)", "(1 - b)", "0.5a ", "(a or 2.5)*", "max(a, 0.9*b)*", "0.5sqrt(a)", "b^2 ");
 const variableFactor = fc.constantFrom("", "1.5*", "1.5*psi0*", "psi0*", "(1 or psi0)*");
 const mark = fc.constantFrom("", "", "", "!", "?");
 const sign = fc.constantFrom(" + ", " + ", " - ", " ± ");

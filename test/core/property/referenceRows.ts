@@ -157,7 +157,11 @@ function evaluate(a: Arith, choice: Map<Arith, number>, symbol: LoadSymbol, numb
     case "binary": {
       const l = evaluate(a.left, choice, symbol, numbers);
       const r = evaluate(a.right, choice, symbol, numbers);
-      return a.op === "+" ? l + r : a.op === "-" ? l - r : a.op === "*" ? l * r : l / r;
+      return a.op === "+" ? l + r : a.op === "-" ? l - r : a.op === "*" ? l * r : a.op === "/" ? l / r : l ** r;
+    }
+    case "call": {
+      const xs = a.args.map((x) => evaluate(x, choice, symbol, numbers));
+      return a.fn === "abs" ? Math.abs(xs[0]) : a.fn === "sqrt" ? Math.sqrt(xs[0]) : a.fn === "max" ? Math.max(...xs) : Math.min(...xs);
     }
   }
 }
@@ -171,6 +175,7 @@ function choicesOf(a: Arith | null): Map<Arith, number>[] {
       nodes.push(x);
       x.options.forEach(walk);
     } else if (x.kind === "negate") walk(x.operand);
+    else if (x.kind === "call") x.args.forEach(walk);
     else if (x.kind === "binary") {
       walk(x.left);
       walk(x.right);
