@@ -14,6 +14,9 @@ export type ProblemKind =
   // the rulesets a workbook can name
   | "ruleset-unknown"
   | "ruleset-store"
+  // the firm library: reading it from a file or an address, and where a workbook keeps its address
+  | "library-read"
+  | "library-link"
   // expressions
   | "expression-syntax"
   | "expression-unknown-name"
