@@ -13,7 +13,7 @@ import { comparison, type Compared } from "./compareView.js";
 import { button, el } from "./dom.js";
 import { firmLibraryState } from "./firmLibraryState.js";
 import type { PaneContext } from "./paneContext.js";
-import { approvalLine } from "./statusText.js";
+import { approvalLine, fromMemoryBox } from "./statusText.js";
 
 /** The library's version in words: "version 1.0.1 approved by B. Name on 2026-02-27 (fingerprint 4c1e…)". */
 export function libraryVersionText(entry: FirmLibraryEntry): string {
@@ -106,6 +106,8 @@ export function updateSection(ctx: PaneContext, entry: FirmLibraryEntry): HTMLEl
     params,
     el(doc, "p", { id: "lw-firm-params-hint", class: "hint" }, "e.g. SDS=1.0 — a parameter without a default must be given to form the rows of the combinations that read it. Empty: the defaults. Enter to apply."),
     compared,
+    // An approval does not make a ruleset Checked: what the library's version holds from memory is said before storing.
+    after.status?.verification === "unverified" ? fromMemoryBox(doc, entry.ruleset.file) : null,
     el(doc, "div", { class: "alarm-box" }, el(doc, "label", { for: "lw-firm-confirm", class: "check" }, confirm, ` ${replaces}.`)),
     el(
       doc,

@@ -218,6 +218,9 @@ describe("reading the firm library over HTTPS", () => {
       ` Replace the stored "asce7-16-strength" version 1.0.0 (fingerprint ${fp12(older)}; approved by A. Approver (invented) on 2025-06-30) in this browser ` +
         `with the firm library's version 1.0.1 approved by B. Approver (invented) on 2026-02-27 (fingerprint ${fp12(newer)}).`,
     );
+    // docs/rulesets.md, "Rulesets": a from-memory source makes a ruleset UNVERIFIED, approved or not; what it covers is said before storing.
+    expect(newer.provenance.some((p) => p.status === "from-memory")).toBe(true);
+    expect(await page().locator("#lw-firm-update .from-memory-box").count()).toBe(1);
     await screenshot(page(), "firm-library-compare");
     const before = await storedValue(page());
     expect(await page().locator("#lw-firm-store").isDisabled()).toBe(true);
@@ -235,6 +238,24 @@ describe("reading the firm library over HTTPS", () => {
     );
     await showView(page(), "library");
     expect(await page().locator("#lw-firm-behind").count()).toBe(0);
+  });
+
+  test("stores a library ruleset the workbook does not hold, after a confirmation naming the shipped ruleset it stands in for", async () => {
+    await showView(page(), "firm-library");
+    await page().locator('[data-take="en1990-str-6.10"]').click();
+    await page().waitForSelector('#lw-firm-update[data-ruleset-id="en1990-str-6.10"]');
+    // The library approved the shipped content unchanged: Compare says the content is the same.
+    expect(await page().locator("#lw-compare-same").count()).toBe(1);
+    const shippedPrint = fp12(shipped("en1990-str-6.10"));
+    expect(await page().locator("label[for=lw-firm-confirm]").textContent()).toBe(
+      ` Store the firm library's version ${str.version} approved by A. Approver (invented) on 2026-01-07 (fingerprint ${shippedPrint}) in this browser; ` +
+        `formulas naming "en1990-str-6.10" then use it instead of the shipped version ${str.version} (fingerprint ${shippedPrint}).`,
+    );
+    await page().locator("#lw-firm-confirm").check();
+    await page().locator("#lw-firm-store").click();
+    await page().waitForSelector('#lw-firm-stored li[data-ruleset-id="en1990-str-6.10"][data-standing="same"]');
+    expect((await storedFiles(page())).find((f) => f.id === "en1990-str-6.10")).toEqual(str);
+    expect(await page().locator("#lw-firm-missing").count()).toBe(0);
   });
 
   test("refuses a body larger than the limit, reading it as a stream and stopping there", async () => {
