@@ -89,7 +89,7 @@ function read(ctx: PaneContext, source: LibrarySource): void {
       const current = library.entries.filter((e) => e.current).length;
       ctx.notice(`Read the firm library "${library.title}" of ${library.date} from ${r.name}: ${library.entries.length} approved ${library.entries.length === 1 ? "version" : "versions"} of ${current} ${current === 1 ? "ruleset" : "rulesets"}; nothing stored changed.`, "done");
     } else if (s.failure) {
-      ctx.notice(`The firm library was not read from ${s.failure.from}; nothing changed.`, "problem");
+      ctx.notice(`${s.failure.from} ${s.failure.invalid ? "does not load as a firm library" : "could not be read"}; nothing changed (the reasons are below).`, "problem");
     }
     ctx.show("firm-library");
   });
