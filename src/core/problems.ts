@@ -17,6 +17,9 @@ export type ProblemKind =
   // any input read from JSON or text: beyond a stated limit (src/core/limits.ts), or a field name that reaches prototypes
   | "input-limit"
   | "input-forbidden-key"
+  // the firm library: reading it from a file or an address, and where a workbook keeps its address
+  | "library-read"
+  | "library-link"
   // expressions
   | "expression-syntax"
   | "expression-unknown-name"

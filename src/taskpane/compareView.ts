@@ -98,7 +98,10 @@ export function compareView(ctx: PaneContext): HTMLElement {
   return root;
 }
 
-function side(doc: Document, word: string, c: Candidate): HTMLElement {
+/** What a comparison needs of each side (the Firm library view compares a stored copy with the library's version). */
+export type Compared = Pick<Candidate, "label" | "ruleset" | "status" | "why">;
+
+function side(doc: Document, word: string, c: Compared): HTMLElement {
   const f = c.ruleset?.file;
   return el(
     doc,
@@ -109,7 +112,7 @@ function side(doc: Document, word: string, c: Candidate): HTMLElement {
   );
 }
 
-function comparison(ctx: PaneContext, a: Candidate | undefined, b: Candidate | undefined, paramsText: string): HTMLElement[] {
+export function comparison(ctx: PaneContext, a: Compared | undefined, b: Compared | undefined, paramsText: string): HTMLElement[] {
   const { doc } = ctx;
   if (!a || !b) return [el(doc, "p", {}, "Choose two rulesets.")];
   const head = [side(doc, "Before", a), side(doc, "After", b)];

@@ -1,14 +1,16 @@
 /**
  * Library: every ruleset a formula can name, stored first, then shipped, each
  * with its verification (UNVERIFIED in words), approval, source and
- * fingerprint; the selected one's details, what to do with it, and its
- * combination list as LW.COMBOS gives it.
+ * fingerprint, and its standing against the firm library where one is read;
+ * the selected one's details, what to do with it, and its combination list as
+ * LW.COMBOS gives it.
  */
 import { stampLine, type Ruleset, type RulesetFile, type RulesetStatus } from "../core/index.js";
 import { entryOrigin, type LibraryEntry } from "../workbook/rulesetLibrary.js";
 import { comboList } from "./comboList.js";
 import { button, el, uniqueId } from "./dom.js";
 import { exportButtons } from "./exportRuleset.js";
+import { firmLibraryLine, standingBadge } from "./firmStanding.js";
 import { newIdField } from "./newIdField.js";
 import type { Draft } from "./draftStore.js";
 import { draftOfCopy, draftOfStored, draftOfUnloadable } from "./openDraft.js";
@@ -21,6 +23,7 @@ export function libraryView(ctx: PaneContext): HTMLElement {
   if (ctx.selected === null || !entries.some((e) => e.id === ctx.selected)) ctx.selected = entries[0]?.id ?? null;
   const root = el(doc, "div", { id: "lw-library" });
   if (storeProblem) root.append(el(doc, "p", { id: "lw-store-problem", class: "problem", role: "alert" }, storeProblem));
+  root.append(firmLibraryLine(ctx));
   const drafts = ctx.drafts.list();
   if (drafts.length > 0) {
     root.append(
@@ -66,6 +69,7 @@ function entryItem(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
       "div",
       { class: "entry-meta" },
       f && entry.status ? approvalBadge(doc, f, entry.status) : null,
+      standingBadge(ctx, entry),
       el(doc, "span", { class: "entry-source" }, sourceLine(entry, ctx.storedWhere)),
       entry.status ? el(doc, "span", { class: "fingerprint", title: entry.status.fingerprint }, entry.status.shortFingerprint) : null,
     ),

@@ -12,6 +12,7 @@ import { compareView } from "./compareView.js";
 import { el } from "./dom.js";
 import { DraftStore } from "./draftStore.js";
 import { editorView } from "./editorView.js";
+import { firmLibraryView } from "./firmLibraryView.js";
 import { libraryView } from "./libraryView.js";
 import { libraryFunctions, type PaneContext, type ViewName } from "./paneContext.js";
 import { transferView } from "./transferView.js";
@@ -29,6 +30,7 @@ const VIEWS: { name: ViewName; label: string; render: (ctx: PaneContext) => HTML
   { name: "editor", label: "Editor", render: editorView },
   { name: "compare", label: "Compare", render: compareView },
   { name: "approve", label: "Approve", render: approveView },
+  { name: "firm-library", label: "Firm library", render: firmLibraryView },
   { name: "transfer", label: "Import / export", render: transferView },
 ];
 

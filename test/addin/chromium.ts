@@ -29,12 +29,17 @@ export interface Browser {
   close(): Promise<void>;
 }
 
-export async function openBrowser(): Promise<Browser> {
+export interface BrowserOptions {
+  /** More command-line flags (a test trusting its own certificate, say). */
+  args?: string[];
+}
+
+export async function openBrowser(options: BrowserOptions = {}): Promise<Browser> {
   const profile = mkdtempSync(path.join(tmpdir(), "loadwright-chromium-"));
   const context: BrowserContext = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM,
     headless: true,
-    args: FLAGS,
+    args: [...FLAGS, ...(options.args ?? [])],
   });
   await context.route("https://appsforoffice.microsoft.com/**", (route) =>
     route.fulfill({ status: 200, contentType: "text/javascript", body: "/* office.js is not loaded in tests */" }),

@@ -7,7 +7,7 @@ import { mkdirSync } from "node:fs";
 import path from "node:path";
 import type { Page } from "playwright-core";
 import { builtAddin, ROOT } from "../addin/builtAddin.js";
-import { openBrowser, type Browser } from "../addin/chromium.js";
+import { openBrowser, type Browser, type BrowserOptions } from "../addin/chromium.js";
 import { serveDirectory, type StaticServer } from "../addin/staticServer.js";
 
 /** Excel's task pane is about 320–450 px wide. */
@@ -20,9 +20,9 @@ export interface Pane {
   close(): Promise<void>;
 }
 
-export async function openPane(): Promise<Pane> {
+export async function openPane(options: BrowserOptions = {}): Promise<Pane> {
   const server: StaticServer = await serveDirectory(await builtAddin());
-  const browser: Browser = await openBrowser();
+  const browser: Browser = await openBrowser(options);
   await browser.page.setViewportSize({ width: PANE_WIDTH, height: 900 });
   await browser.page.goto(`${server.origin}/taskpane.html`);
   await browser.page.waitForSelector("#lw-rulesets li[data-ruleset-id]");
@@ -51,7 +51,7 @@ export function overflowsWidth(page: Page): Promise<boolean> {
   return page.evaluate(() => document.documentElement.scrollWidth > document.documentElement.clientWidth);
 }
 
-export async function showView(page: Page, view: "library" | "editor" | "compare" | "approve" | "transfer"): Promise<void> {
+export async function showView(page: Page, view: "library" | "editor" | "compare" | "approve" | "transfer" | "firm-library"): Promise<void> {
   await page.locator(`#lw-tab-${view}`).click();
   await page.waitForSelector(`#lw-view[data-view="${view}"]`);
 }
