@@ -101,7 +101,7 @@ export class RulesetStore {
     } catch (e) {
       // A hook is not meant to throw; if it does, the write still stands and the user hears why nothing followed.
       const reason = e instanceof Error ? e.message : String(e);
-      return { ...result, afterWrite: `Stored, but what should follow a store did not run (${reason}).` };
+      return { ...result, afterWrite: `The change is stored, but what follows a store did not run (${reason}).` };
     }
   }
 
