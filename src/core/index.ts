@@ -4,7 +4,7 @@
  * → plan → envelope / governing / factored / combos / explain.
  */
 export type { Cell } from "./cells.js";
-export { isBlank, cellText, DECIMAL_TEXT } from "./cells.js";
+export { isBlank, cellText, DECIMAL_TEXT, trimTrailingEmpty } from "./cells.js";
 export {
   columnLetters,
   describePlace,
@@ -69,6 +69,7 @@ export { comboRows, type ComboRow } from "./evaluate/combos.js";
 export { explain, findRow, type Explanation, type ExplanationLine } from "./evaluate/explain.js";
 export { DEFAULT_ROW_LIMIT, enumerateRows, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
 export { planForTable } from "./planForTable.js";
+export { resultSizes, RULESET_FIELDS, type ResultSize, type ResultSizes } from "./evaluate/resultSizes.js";
 
 // What every surface says (one vocabulary)
 export { statusText, approvalWords, approvedByText, VERIFICATION_WORDS, type ApprovalRecord, type ApprovalWords, type StatusText } from "./text/statusText.js";
