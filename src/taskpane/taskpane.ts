@@ -14,6 +14,7 @@ import { DraftStore } from "./draftStore.js";
 import { editorView } from "./editorView.js";
 import { libraryView } from "./libraryView.js";
 import { libraryFunctions, type PaneContext, type ViewName } from "./paneContext.js";
+import { sheetView } from "./sheetView.js";
 import { transferView } from "./transferView.js";
 
 export interface PaneOptions {
@@ -30,6 +31,7 @@ const VIEWS: { name: ViewName; label: string; render: (ctx: PaneContext) => HTML
   { name: "compare", label: "Compare", render: compareView },
   { name: "approve", label: "Approve", render: approveView },
   { name: "transfer", label: "Import / export", render: transferView },
+  { name: "sheet", label: "Sheet", render: sheetView },
 ];
 
 export function startTaskPane(doc: Document, options: PaneOptions): void {
