@@ -113,24 +113,35 @@ async function writeCells(context: Excel.RequestContext, sheetName: string, cell
   const sheet = found.value;
   if (options.clear) sheet.getRange(areaAddress(options.clear)).clear(Excel.ClearApplyTo.contents);
   let pending = 0;
-  for (const run of rowRuns(cells)) {
-    const first = run[0];
-    const last = run[run.length - 1];
-    const range = sheet.getRange(run.length === 1 ? first.address : `${first.address}:${last.address}`);
-    range.formulas = [run.map(writtenForm)];
-    for (const cell of run) if (cell.style) styleCell(sheet.getRange(cell.address), cell.style);
-    pending += run.length;
+  for (const block of writeBlocks(cells)) {
+    const area = { sheet: sheetName, top: block.top, left: block.left, rows: block.rows.length, columns: block.rows[0].length };
+    sheet.getRange(areaAddress(area)).formulas = block.rows;
+    pending += area.rows * area.columns;
     if (pending >= CELLS_PER_SYNC) {
       await context.sync();
       pending = 0;
     }
   }
+  for (const cell of cells) if (cell.style) styleCell(sheet.getRange(cell.address), cell.style);
   await context.sync();
   return { ok: true, value: true };
 }
 
-/** Cells in writing order, cut into runs of neighbours on one row: one range written per run. */
-function rowRuns(cells: readonly SheetCell[]): SheetCell[][] {
+export interface WriteBlock {
+  /** 0-based row and column of the block's top-left cell. */
+  top: number;
+  left: number;
+  /** What each cell is given (writtenForm), rows of equal length. */
+  rows: (string | number)[][];
+}
+
+/**
+ * The cells as few rectangles as their shape allows, each written with one
+ * range: neighbours on a row make a run, and runs of the same columns on
+ * consecutive rows a block (at most CELLS_PER_SYNC cells). A cell not in the
+ * list is never written, not even as "", so nothing lands in a spill's way.
+ */
+export function writeBlocks(cells: readonly SheetCell[]): WriteBlock[] {
   const sorted = [...cells].sort((a, b) => a.row - b.row || a.column - b.column);
   const runs: SheetCell[][] = [];
   for (const cell of sorted) {
@@ -139,7 +150,21 @@ function rowRuns(cells: readonly SheetCell[]): SheetCell[][] {
     if (previous && previous.row === cell.row && previous.column + 1 === cell.column) run.push(cell);
     else runs.push([cell]);
   }
-  return runs;
+  const blocks: WriteBlock[] = [];
+  const open = new Map<string, WriteBlock>();
+  for (const run of runs) {
+    const top = run[0].row - 1;
+    const key = `${run[0].column}:${run.length}`;
+    const block = open.get(key);
+    if (block && block.top + block.rows.length === top && (block.rows.length + 1) * run.length <= CELLS_PER_SYNC) {
+      block.rows.push(run.map(writtenForm));
+    } else {
+      const started = { top, left: run[0].column, rows: [run.map(writtenForm)] };
+      blocks.push(started);
+      open.set(key, started);
+    }
+  }
+  return blocks;
 }
 
 function styleCell(range: Excel.Range, style: SheetStyle): void {

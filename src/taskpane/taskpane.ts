@@ -30,8 +30,8 @@ const VIEWS: { name: ViewName; label: string; render: (ctx: PaneContext) => HTML
   { name: "editor", label: "Editor", render: editorView },
   { name: "compare", label: "Compare", render: compareView },
   { name: "approve", label: "Approve", render: approveView },
-  { name: "transfer", label: "Import / export", render: transferView },
   { name: "sheet", label: "Sheet", render: sheetView },
+  { name: "transfer", label: "Import / export", render: transferView },
 ];
 
 export function startTaskPane(doc: Document, options: PaneOptions): void {

@@ -77,6 +77,17 @@ describe("the Sheet view on the demo table", () => {
     expect(await page().locator("#lw-sheet-copy-result").textContent()).toMatch(/to the new worksheet "Reviewer copy": \d+ combination rows × 3 results, 5 cases/);
   });
 
+  test("labels every control and needs no horizontal scroll bar, down to 320 px", async () => {
+    const unlabelled = await page().evaluate(() =>
+      [...document.querySelectorAll<HTMLElement>("#lw-view input, #lw-view select, #lw-view textarea, #lw-view button")]
+        .filter((c) => !((c as HTMLInputElement).labels?.length ?? 0) && !c.getAttribute("aria-label") && (c.tagName !== "BUTTON" || c.textContent?.trim() === ""))
+        .map((c) => c.outerHTML.slice(0, 100)),
+    );
+    expect(unlabelled).toEqual([]);
+    await page().setViewportSize({ width: 320, height: 800 });
+    expect(await overflowsWidth(page())).toBe(false);
+  });
+
   test("writes nothing to the console", () => {
     expect(pane.console).toEqual([]);
   });
