@@ -18,6 +18,8 @@ import type { RangeRead, SheetHost, WriteOptions } from "../sheet/sheetHost.js";
 export const MAX_READ_CELLS = 1_000_000;
 /** Cells written per sync, so that no request nears the platform's payload limit. */
 const CELLS_PER_SYNC = 5_000;
+/** Cells read per sync where a block is checked before it is written. */
+const READ_CHUNK_CELLS = 100_000;
 
 const failed = (message: string): Result<never> => ({ ok: false, problems: [problem("sheet-range", message)] });
 const reasonOf = (e: unknown): string => (e instanceof Error ? e.message : String(e));
@@ -30,7 +32,7 @@ export function excelSheetHost(): SheetHost {
     readArea: (area) =>
       attempt(areaName(area), async (context) => {
         const sheet = await worksheet(context, area.sheet);
-        return sheet.ok ? readRange(context, sheet.value.getRange(areaAddress(area)), null, areaName(area)) : sheet;
+        return sheet.ok ? readBlock(context, sheet.value, area) : sheet;
       }),
     write: (sheetName, cells, options) => attempt(`worksheet ${sheetName}`, (context) => writeCells(context, sheetName, cells, options ?? {})),
     addSheet: (name) => attempt(`a new worksheet "${name}"`, (context) => addSheet(context, name)),
@@ -83,9 +85,26 @@ async function readRange(context: Excel.RequestContext, range: Excel.Range, name
   await context.sync();
   const area: SheetArea = { sheet: range.worksheet.name, top: range.rowIndex, left: range.columnIndex, rows: range.rowCount, columns: range.columnCount };
   const values = (range.values as unknown[][]).map((row) => row.map(cellOf));
-  const formulas = (range.formulas as unknown[][]).map((row) => row.map((f) => (typeof f === "string" && f.startsWith("=") ? f : "")));
+  const formulas = (range.formulas as unknown[][]).map((row) => row.map(formulaOf));
   return { ok: true, value: { area, name, values, formulas } };
 }
+
+/** A block to be written over, however large (a long combination list): read in parts, each well within a request's limits. */
+async function readBlock(context: Excel.RequestContext, sheet: Excel.Worksheet, area: SheetArea): Promise<Result<RangeRead>> {
+  const chunk = Math.max(1, Math.floor(READ_CHUNK_CELLS / area.columns));
+  const values: Cell[][] = [];
+  const formulas: string[][] = [];
+  for (let top = area.top; top < area.top + area.rows; top += chunk) {
+    const range = sheet.getRange(areaAddress({ ...area, top, rows: Math.min(chunk, area.top + area.rows - top) }));
+    range.load("values, formulas");
+    await context.sync();
+    values.push(...(range.values as unknown[][]).map((row) => row.map(cellOf)));
+    formulas.push(...(range.formulas as unknown[][]).map((row) => row.map(formulaOf)));
+  }
+  return { ok: true, value: { area, name: null, values, formulas } };
+}
+
+const formulaOf = (f: unknown): string => (typeof f === "string" && f.startsWith("=") ? f : "");
 
 /** Excel gives "" for an empty cell; the core reads null as blank. */
 function cellOf(value: unknown): Cell {

@@ -89,7 +89,7 @@ export function sheetView(ctx: PaneContext): HTMLElement {
   const busy = (b: HTMLButtonElement, out: HTMLElement, work: () => Promise<void>) => {
     b.disabled = true;
     show(out, "working", el(doc, "p", { class: "muted" }, "Working…"));
-    void work().finally(() => {
+    void guarded(out, work).finally(() => {
       b.disabled = false;
     });
   };
@@ -208,6 +208,17 @@ export function sheetView(ctx: PaneContext): HTMLElement {
   return root;
 }
 
+/** Runs the work; Excel's refusals and bad input are problems already, so anything thrown here is a defect, and said so. */
+async function guarded(out: HTMLElement, work: () => Promise<void>): Promise<void> {
+  try {
+    await work();
+  } catch (e) {
+    const reason = e instanceof Error ? e.message : String(e);
+    const doc = out.ownerDocument;
+    show(out, "problem", el(doc, "p", { class: "problem" }, `The pane stopped on an unexpected error (${reason}); this is a defect in Loadwright, please report it with the case table.`));
+  }
+}
+
 function textInput(doc: Document, id: string, value: string, hint: string): HTMLInputElement {
   const input = el(doc, "input", { id, type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": hint });
   input.value = value;
@@ -300,7 +311,7 @@ function confirmOverwrite(ctx: PaneContext, host: SheetHost, t: TableOnSheet, pr
     `Write over ${range}`,
     () => {
       write.disabled = true;
-      void commitInsert(ctx, host, t, prepared, out);
+      void guarded(out, () => commitInsert(ctx, host, t, prepared, out));
     },
     { id: "lw-sheet-confirm-write", class: "danger" },
   );

@@ -74,7 +74,7 @@ export async function prepareInsert(host: SheetHost, t: TableOnSheet, criteriaTe
 export async function writeInsert(host: SheetHost, prepared: PreparedInsert): Promise<PaneResult<true>> {
   const { block } = prepared;
   const written = await host.write(block.area.sheet, block.cells, { clear: block.area });
-  return written.ok ? written : { ok: false, lines: written.problems.map((p) => `Nothing more was written: ${p.message}`) };
+  return written.ok ? written : { ok: false, lines: written.problems.map((p) => `The formulas were not (all) written: ${p.message}`) };
 }
 
 function overlaps(a: SheetArea, b: SheetArea): boolean {

@@ -318,6 +318,21 @@ describe("inserting the starter formulas", () => {
     // [confirmed, steel design examples]: 840.
     expect(result.find((r) => r[0] === "P")?.[1] as number).toBeCloseTo(840, 9);
   });
+
+  test("says where the cell to write at is no cell, or on no worksheet, and writes nothing", async () => {
+    await page().locator("#lw-sheet-cases").fill("Loads!A1:B3");
+    const before = (await pane.record()).writes.length;
+    for (const [at, said] of [
+      ["the top", 'Write at: "the top" is not a cell such as F1 or Calc!B2.'],
+      ["Nowhere!A1", 'there is no worksheet named "Nowhere" in this workbook'],
+    ]) {
+      await page().locator("#lw-sheet-at").fill(at);
+      await page().locator("#lw-sheet-insert").click();
+      expect(await settled("lw-sheet-insert-result")).toBe("problem");
+      expect(await page().locator("#lw-sheet-insert-result li").allTextContents()).toEqual([said]);
+    }
+    expect((await pane.record()).writes.length).toBe(before);
+  });
 });
 
 describe("writing over cells", () => {
