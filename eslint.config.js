@@ -4,6 +4,7 @@
 //   src/workbook   the rulesets a workbook can name (store, library): imports the core only
 //   src/functions  the formulas, src/taskpane the pane, src/cli the command line: each imports
 //                  the core (and, in the add-in, the workbook module), never another adapter
+//   src/sheet      sheets as cells (the reviewer's copy, the starter block, the sheet host): imports the core only
 //   src/addin      the add-in: only its entry, main.ts, wires the parts together
 // Type-aware rules run on the folders listed in TYPED; the rest follow as they are brought in.
 import tseslint from "typescript-eslint";
@@ -14,6 +15,7 @@ const ADAPTERS = {
   cli: "**/cli/**",
   addin: "**/addin/**",
   workbook: "**/workbook/**",
+  sheet: "**/sheet/**",
 };
 
 /** A no-restricted-imports rule refusing the named folders, with why. */
@@ -27,6 +29,7 @@ export const TYPED = [
   "src/addin/**/*.ts",
   "src/taskpane/**/*.ts",
   "src/workbook/**/*.ts",
+  "src/sheet/**/*.ts",
   "src/core/text/**/*.ts",
   "src/core/ruleset/**/*.ts",
   "src/cli/output/**/*.ts",
@@ -48,7 +51,7 @@ export default tseslint.config(
   {
     files: ["src/core/**/*.ts"],
     rules: {
-      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook"], "src/core knows no adapter.", [
+      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook", "sheet"], "src/core knows no adapter.", [
         { group: ["node:*", "fs", "path", "os", "child_process", "stream"], message: "src/core is pure: no Node APIs." },
         { group: ["office-*", "@microsoft/*"], message: "src/core knows no Office." },
       ]),
@@ -57,15 +60,19 @@ export default tseslint.config(
   },
   {
     files: ["src/workbook/**/*.ts"],
-    rules: { "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin"], "src/workbook is shared by the adapters: it imports the core only.") },
+    rules: { "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "sheet"], "src/workbook is shared by the adapters: it imports the core only.") },
+  },
+  {
+    files: ["src/sheet/**/*.ts"],
+    rules: { "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook"], "src/sheet is shared by the pane, the command line and the add-in: it imports the core only.") },
   },
   {
     files: ["src/functions/**/*.ts"],
-    rules: { "no-restricted-imports": refuse(["taskpane", "cli", "addin"], "src/functions imports the core and src/workbook, never another adapter.") },
+    rules: { "no-restricted-imports": refuse(["taskpane", "cli", "addin", "sheet"], "src/functions imports the core and src/workbook, never another adapter.") },
   },
   {
     files: ["src/taskpane/**/*.ts"],
-    rules: { "no-restricted-imports": refuse(["functions", "cli", "addin"], "src/taskpane imports the core and src/workbook, never another adapter.") },
+    rules: { "no-restricted-imports": refuse(["functions", "cli", "addin"], "src/taskpane imports the core, src/workbook and src/sheet, never another adapter.") },
   },
   {
     files: ["src/cli/**/*.ts"],

@@ -5,19 +5,26 @@
  * formulas and task pane see the same stored rulesets) and in a plain browser
  * for trying the pane out. It is the one place that wires the parts together:
  * it makes the ruleset library, hands it to the formulas and to the pane.
- * Inside Excel stored rulesets live in the workbook's settings; in a browser
- * they live in local storage, and a demo ruleset is put there on first use.
+ * Inside Excel stored rulesets live in the workbook's settings, every store is
+ * followed by a recalculation of the workbook (the store's one hook), and the
+ * pane's Sheet view works on the workbook; in a browser rulesets live in local
+ * storage, a demo ruleset is put there on first use, and the Sheet view works
+ * on an invented demo table kept in the page.
  */
+import { connectSheet } from "../taskpane/sheetConnection.js";
 import { startTaskPane } from "../taskpane/taskpane.js";
 import { RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import { RulesetStore } from "../workbook/rulesetStore.js";
 import { browserStorageBackend } from "./browserStorageBackend.js";
 import { seedDemoRuleset } from "./demoRuleset.js";
+import { demoSheetHost } from "./demoSheetHost.js";
+import { excelSheetHost } from "./excelSheetHost.js";
 import { officeSettingsBackend } from "./officeSettingsBackend.js";
+import { recalculateWorkbook } from "./recalculateWorkbook.js";
 
 const hasOffice = typeof Office !== "undefined";
 const browserStore = () => new RulesetStore(browserStorageBackend(window.localStorage));
-const library = new RulesetLibrary(hasOffice ? new RulesetStore(officeSettingsBackend()) : browserStore());
+const library = new RulesetLibrary(hasOffice ? new RulesetStore(officeSettingsBackend(), { afterWrite: recalculateWorkbook }) : browserStore());
 
 // Formulas first: Excel may call them as soon as they are associated.
 if (typeof CustomFunctions !== "undefined") {
@@ -36,5 +43,6 @@ void officeHost().then(async (host) => {
     if (hasOffice) library.useStore(browserStore());
     await seedDemoRuleset(library.store);
   }
+  connectSheet(inExcel ? excelSheetHost() : demoSheetHost());
   startTaskPane(document, { inExcel, library });
 });

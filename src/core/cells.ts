@@ -18,3 +18,19 @@ export function cellText(cell: Cell): string {
 
 /** "12.5", "-3", "1e3": a number written as text (CSV fields, typed parameters). */
 export const DECIMAL_TEXT = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
+
+const blankOrZero = (c: Cell) => isBlank(c) || c === 0;
+
+/**
+ * A case table as a range gives it: trailing rows and columns that hold only
+ * blanks and zeros are outside it (no header can be 0, and an older Excel
+ * build sends 0 for an empty cell), so a generous selection reads as the table.
+ */
+export function trimTrailingEmpty(m: Cell[][]): Cell[][] {
+  let rows = m.length;
+  while (rows > 0 && m[rows - 1].every(blankOrZero)) rows--;
+  const kept = m.slice(0, rows);
+  let width = Math.max(0, ...kept.map((r) => r.length));
+  while (width > 0 && kept.every((r) => r.length < width || blankOrZero(r[width - 1]))) width--;
+  return kept.map((r) => (r.length > width ? r.slice(0, width) : r));
+}

@@ -4,7 +4,7 @@
  * → plan → envelope / governing / factored / combos / explain.
  */
 export type { Cell } from "./cells.js";
-export { isBlank, cellText, DECIMAL_TEXT } from "./cells.js";
+export { isBlank, cellText, DECIMAL_TEXT, trimTrailingEmpty } from "./cells.js";
 export {
   columnLetters,
   describePlace,
@@ -77,6 +77,7 @@ export { explain, findRow, type Explanation, type ExplanationLine } from "./eval
 export { DEFAULT_ROW_LIMIT, enumerateRows, labelOf, listRows, rowLabel, rowValue, rowValues } from "./evaluate/rows.js";
 export { planForTable } from "./planForTable.js";
 export { cachedPlanForTable, cachedPlanCount, clearPlanCache, PLAN_CACHE_LIMIT } from "./plan/planCache.js";
+export { resultSizes, RULESET_FIELDS, type ResultSize, type ResultSizes } from "./evaluate/resultSizes.js";
 
 // What every surface says (one vocabulary)
 export { statusText, approvalWords, approvedByText, VERIFICATION_WORDS, type ApprovalRecord, type ApprovalWords, type StatusText } from "./text/statusText.js";

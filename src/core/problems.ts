@@ -48,7 +48,9 @@ export type ProblemKind =
   | "unknown-row"
   | "unknown-component"
   | "criterion-syntax"
-  | "result-not-finite";
+  | "result-not-finite"
+  // the worksheet a surface reads or writes (the task pane's sheet host)
+  | "sheet-range";
 
 /** Where a problem is. Every field is optional; adapters show the ones present. */
 export interface Place {

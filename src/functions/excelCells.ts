@@ -51,12 +51,5 @@ export function blankZeroRows(m: Cell[][]): Cell[][] {
   return m.map((row) => (row.every(blankOrZero) ? row.map(() => null) : row));
 }
 
-/** Case tables: drop trailing rows and columns that hold only blanks and zeros. */
-export function trimTrailingEmpty(m: Cell[][]): Cell[][] {
-  let rows = m.length;
-  while (rows > 0 && m[rows - 1].every(blankOrZero)) rows--;
-  const kept = m.slice(0, rows);
-  let width = Math.max(0, ...kept.map((r) => r.length));
-  while (width > 0 && kept.every((r) => r.length < width || blankOrZero(r[width - 1]))) width--;
-  return kept.map((r) => (r.length > width ? r.slice(0, width) : r));
-}
+/** Case tables: trailing rows and columns of blanks and zeros dropped (the core's rule, which the task pane's preview shares). */
+export { trimTrailingEmpty } from "../core/index.js";

@@ -6,6 +6,7 @@
  */
 import { approveRuleset, describeProblem, formatPath, type Ruleset, type RulesetStatus } from "../core/index.js";
 import type { LibraryEntry } from "../workbook/rulesetLibrary.js";
+import { withAfterWrite } from "./afterWrite.js";
 import { calendarDateProblem } from "./approvalDate.js";
 import { button, el, todayText } from "./dom.js";
 import type { PaneContext } from "./paneContext.js";
@@ -138,7 +139,7 @@ function approvalForm(ctx: PaneContext, approvable: Approvable): HTMLElement {
       outcome.textContent = `Not approved: ${saved.problems.map((p) => describeProblem(p)).join("; ")}`;
       return;
     }
-    ctx.notice(`Approved ${file.id} by ${approved.value.approval.approvedBy ?? ""} on ${approved.value.approval.date ?? ""} (fingerprint ${status.shortFingerprint}); stored in ${ctx.storedWhere}.`, "done");
+    ctx.notice(withAfterWrite(`Approved ${file.id} by ${approved.value.approval.approvedBy ?? ""} on ${approved.value.approval.date ?? ""} (fingerprint ${status.shortFingerprint}); stored in ${ctx.storedWhere}.`, saved), "done");
     ctx.selected = file.id;
     ctx.show("approve");
   };

@@ -9,6 +9,7 @@
  */
 import { rulesetStatus, shippedRulesets, shortFingerprint, type FirmLibraryEntry } from "../core/index.js";
 import type { LibraryEntry } from "../workbook/rulesetLibrary.js";
+import { withAfterWrite } from "./afterWrite.js";
 import { comparison, type Compared } from "./compareView.js";
 import { button, el } from "./dom.js";
 import { firmLibraryState } from "./firmLibraryState.js";
@@ -91,8 +92,9 @@ export function updateSection(ctx: PaneContext, entry: FirmLibraryEntry): HTMLEl
     }
     firmLibraryState(ctx).updating = null;
     ctx.selected = id;
-    const recalculated = ctx.inExcel ? `the workbook's formulas naming "${id}" recalculate with it` : `formulas naming "${id}" use it (in Excel, the workbook recalculates them)`;
-    ctx.notice(`Stored the firm library's "${id}" ${libraryVersionText(entry)} in ${ctx.storedWhere}, ${replacedPhrase(stored, shipped?.ruleset.file.version ?? null)}; ${recalculated}.`, "done");
+    // What the store's hook did after the write (in Excel: the recalculation, or why it did not happen).
+    const storedText = `Stored the firm library's "${id}" ${libraryVersionText(entry)} in ${ctx.storedWhere}, ${replacedPhrase(stored, shipped?.ruleset.file.version ?? null)}`;
+    ctx.notice(saved.afterWrite ? withAfterWrite(`${storedText}.`, saved) : `${storedText}; formulas naming "${id}" use it.`, "done");
     ctx.show("firm-library");
   };
 

@@ -7,6 +7,7 @@
  */
 import { stampLine, type Ruleset, type RulesetFile, type RulesetStatus } from "../core/index.js";
 import { entryOrigin, type LibraryEntry } from "../workbook/rulesetLibrary.js";
+import { withAfterWrite } from "./afterWrite.js";
 import { comboList } from "./comboList.js";
 import { button, el, uniqueId } from "./dom.js";
 import { exportButtons } from "./exportRuleset.js";
@@ -203,7 +204,7 @@ function removeControl(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
         .remove(entry.id)
         .then((result) => {
           if (result.ok) {
-            ctx.notice(`Removed ${entry.id} from ${ctx.storedWhere}. ${consequence}`, "done");
+            ctx.notice(withAfterWrite(`Removed ${entry.id} from ${ctx.storedWhere}. ${consequence}`, result), "done");
             ctx.selected = null;
           } else {
             ctx.notice(result.problems.map((p) => p.message).join("; "), "problem");

@@ -8,7 +8,7 @@ import type { Library, RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import type { RulesetStore } from "../workbook/rulesetStore.js";
 import type { DraftStore } from "./draftStore.js";
 
-export type ViewName = "library" | "editor" | "compare" | "approve" | "transfer" | "firm-library";
+export type ViewName = "library" | "editor" | "compare" | "approve" | "transfer" | "firm-library" | "sheet";
 
 export interface ComparePair {
   before: string;

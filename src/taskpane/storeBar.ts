@@ -3,6 +3,7 @@
  * problems, and only after confirming anything it would replace or shadow.
  */
 import { button, el, uniqueId } from "./dom.js";
+import { withAfterWrite } from "./afterWrite.js";
 import type { DraftCheck } from "./draftCheck.js";
 import type { Draft } from "./draftStore.js";
 import type { PaneContext } from "./paneContext.js";
@@ -52,7 +53,7 @@ export function renderStoreBar(ctx: PaneContext, draft: Draft, check: DraftCheck
         ctx.drafts.remove(draft.key);
         ctx.openDraft = null;
         ctx.selected = ruleset.file.id;
-        ctx.notice(`Stored ${ruleset.file.id} ${ruleset.file.version} in ${ctx.storedWhere} (fingerprint ${check.status?.shortFingerprint ?? ""}); the draft is closed.`, "done");
+        ctx.notice(withAfterWrite(`Stored ${ruleset.file.id} ${ruleset.file.version} in ${ctx.storedWhere} (fingerprint ${check.status?.shortFingerprint ?? ""}); the draft is closed.`, result), "done");
         ctx.show("library");
       });
   });

@@ -15,6 +15,7 @@ import { editorView } from "./editorView.js";
 import { firmLibraryView } from "./firmLibraryView.js";
 import { libraryView } from "./libraryView.js";
 import { libraryFunctions, type PaneContext, type ViewName } from "./paneContext.js";
+import { sheetView } from "./sheetView.js";
 import { transferView } from "./transferView.js";
 
 export interface PaneOptions {
@@ -31,6 +32,7 @@ const VIEWS: { name: ViewName; label: string; render: (ctx: PaneContext) => HTML
   { name: "compare", label: "Compare", render: compareView },
   { name: "approve", label: "Approve", render: approveView },
   { name: "firm-library", label: "Firm library", render: firmLibraryView },
+  { name: "sheet", label: "Sheet", render: sheetView },
   { name: "transfer", label: "Import / export", render: transferView },
 ];
 

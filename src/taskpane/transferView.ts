@@ -7,6 +7,7 @@
  * .json download, or as text to copy where the host blocks downloads.
  */
 import { compareRulesets, shippedRulesets, type RulesetFile } from "../core/index.js";
+import { withAfterWrite } from "./afterWrite.js";
 import { button, el } from "./dom.js";
 import { checkDraft } from "./draftCheck.js";
 import { draftId } from "./draftLabel.js";
@@ -111,7 +112,7 @@ function importResult(ctx: PaneContext, text: string, source: string): HTMLEleme
           return;
         }
         ctx.selected = f.id;
-        ctx.notice(`Imported and stored ${f.id} ${f.version} in ${ctx.storedWhere} (fingerprint ${status.shortFingerprint}).`, "done");
+        ctx.notice(withAfterWrite(`Imported and stored ${f.id} ${f.version} in ${ctx.storedWhere} (fingerprint ${status.shortFingerprint}).`, saved), "done");
         ctx.show("library");
       });
   }, { id: "lw-import-store", class: "primary" });

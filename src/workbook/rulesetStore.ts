@@ -3,7 +3,9 @@
  * one JSON value holding every stored ruleset file exactly as validated. A save
  * checks the new file first and writes only if it loads; a stored value that
  * cannot be read is never overwritten, so nothing stored is lost to a failed
- * import or a bad edit.
+ * import or a bad edit. After every successful write the store runs its one
+ * hook (inside Excel: recalculate the workbook, so that formulas naming a
+ * ruleset use what is now stored) and hands on the sentence it returns.
  */
 import { loadRuleset, problem, STORE_FORMAT, STORE_KEY, type Problem, type Result, type Ruleset } from "../core/index.js";
 import type { SettingsBackend } from "./settingsBackend.js";
@@ -24,10 +26,31 @@ interface StoreValue {
 
 const storeProblem = (message: string): Problem => problem("ruleset-store", message);
 
+/**
+ * What runs after each successful write, given the ids written (saved or
+ * removed). It says in one sentence what it did, for the pane to show; it
+ * must not throw (a failure is a sentence too), and the write stands either way.
+ */
+export type AfterWrite = (ids: readonly string[]) => Promise<string>;
+
+/** A write's result, with what the hook said after it (absent when the write failed or there is no hook). */
+export type WriteResult<T> = Result<T> & { afterWrite?: string };
+
+export interface RulesetStoreOptions {
+  afterWrite?: AfterWrite;
+}
+
 export class RulesetStore {
   private cache: { text: string; entries: Result<StoredRuleset[]> } | null = null;
 
-  constructor(readonly backend: SettingsBackend) {}
+  private readonly afterWrite: AfterWrite | null;
+
+  constructor(
+    readonly backend: SettingsBackend,
+    options: RulesetStoreOptions = {},
+  ) {
+    this.afterWrite = options.afterWrite ?? null;
+  }
 
   /** Every stored ruleset, or a problem if the stored value cannot be read at all. */
   entries(): Result<StoredRuleset[]> {
@@ -45,9 +68,11 @@ export class RulesetStore {
     return all.ok ? all.value.find((e) => e.id === id) : undefined;
   }
 
-  /** Validates, then adds or replaces the ruleset with the same id. Nothing is written unless it loads. */
-  /** `input`: JSON text or a parsed ruleset file, checked before anything is written. */
-  async save(input: unknown): Promise<Result<Ruleset>> {
+  /**
+   * Validates, then adds or replaces the ruleset with the same id. Nothing is written unless it loads.
+   * `input`: JSON text or a parsed ruleset file, checked before anything is written.
+   */
+  async save(input: unknown): Promise<WriteResult<Ruleset>> {
     const loaded = loadRuleset(input);
     if (!loaded.ok) return loaded;
     const current = this.entries();
@@ -55,17 +80,29 @@ export class RulesetStore {
     const file = loaded.value.file;
     const kept = current.value.filter((e) => e.id !== file.id).map((e) => e.file);
     const written = await this.write([...kept, file]);
-    return written.ok ? loaded : written;
+    return written.ok ? this.after([file.id], loaded) : written;
   }
 
-  async remove(id: string): Promise<Result<true>> {
+  async remove(id: string): Promise<WriteResult<true>> {
     const current = this.entries();
     if (!current.ok) return current;
     if (!current.value.some((e) => e.id === id)) {
       return { ok: false, problems: [storeProblem(`no ruleset "${id}" is stored in ${this.backend.where}`)] };
     }
     const written = await this.write(current.value.filter((e) => e.id !== id).map((e) => e.file));
-    return written.ok ? { ok: true, value: true } : written;
+    return written.ok ? this.after([id], { ok: true, value: true }) : written;
+  }
+
+  /** Runs the hook after a successful write; what it says travels with the result. */
+  private async after<T>(ids: string[], result: Result<T>): Promise<WriteResult<T>> {
+    if (!this.afterWrite) return result;
+    try {
+      return { ...result, afterWrite: await this.afterWrite(ids) };
+    } catch (e) {
+      // A hook is not meant to throw; if it does, the write still stands and the user hears why nothing followed.
+      const reason = e instanceof Error ? e.message : String(e);
+      return { ...result, afterWrite: `The change is stored, but what follows a store did not run (${reason}).` };
+    }
   }
 
   private async write(rulesets: unknown[]): Promise<Result<true>> {

@@ -81,3 +81,50 @@ describe("RulesetStore", () => {
     expect(entry?.loaded.ok).toBe(false);
   });
 });
+
+describe("RulesetStore's hook after a write", () => {
+  /** A hook that notes what it was given and what the store held when it ran. */
+  function noting(backend: SettingsBackend) {
+    const calls: { ids: readonly string[]; stored: string | null }[] = [];
+    const afterWrite = (ids: readonly string[]) => {
+      calls.push({ ids, stored: backend.read(STORE_KEY) });
+      return Promise.resolve(`recalculated for ${ids.join(", ")}`);
+    };
+    return { calls, afterWrite };
+  }
+
+  test("runs after a save and a removal, once the value is written, and its sentence comes with the result", async () => {
+    const backend = memoryBackend();
+    const hook = noting(backend);
+    const store = new RulesetStore(backend, { afterWrite: hook.afterWrite });
+    const saved = await store.save(STRENGTH_FIXTURE);
+    expect(saved.ok && saved.afterWrite).toBe("recalculated for test-strength");
+    expect(hook.calls[0].stored).toContain('"test-strength"');
+    const removed = await store.remove("test-strength");
+    expect(removed.ok && removed.afterWrite).toBe("recalculated for test-strength");
+    expect(hook.calls[1].stored).not.toContain('"test-strength"');
+    expect(hook.calls.map((c) => c.ids)).toEqual([["test-strength"], ["test-strength"]]);
+  });
+
+  test("does not run when nothing was written: a ruleset that does not load, a failed save, an id not stored", async () => {
+    const bad = { ...STRENGTH_FIXTURE, combinations: [{ id: "1", expression: "1.4D + (", clause: "§2.3.1 (1)" }] };
+    const memory = memoryBackend();
+    const first = noting(memory);
+    const store = new RulesetStore(memory, { afterWrite: first.afterWrite });
+    expect((await store.save(bad)).ok).toBe(false);
+    expect((await store.remove("test-strength")).ok).toBe(false);
+    const failing = failingBackend(null);
+    const second = noting(failing);
+    expect((await new RulesetStore(failing, { afterWrite: second.afterWrite }).save(STRENGTH_FIXTURE)).ok).toBe(false);
+    expect([...first.calls, ...second.calls]).toEqual([]);
+  });
+
+  test("keeps the write where the hook throws, and says that what follows a store did not run", async () => {
+    const backend = memoryBackend();
+    const store = new RulesetStore(backend, { afterWrite: () => Promise.reject(new Error("no calculation engine")) });
+    const saved = await store.save(STRENGTH_FIXTURE);
+    expect(saved.ok).toBe(true);
+    expect(saved.afterWrite).toBe("The change is stored, but what follows a store did not run (no calculation engine).");
+    expect(store.find("test-strength")).toBeDefined();
+  });
+});

@@ -22,9 +22,9 @@ async function refusals(file: string, from: string): Promise<string[]> {
   return result.messages.filter((m) => m.ruleId === "no-restricted-imports").map((m) => m.message);
 }
 
-// docs/design.md, "Layers": the core imports nothing of the adapters; src/workbook imports the core only;
-// functions, taskpane and cli import the core (the first two also src/workbook) and never each other;
-// only src/addin/main.ts wires everything.
+// docs/design.md, "Layers": the core imports nothing of the adapters; src/workbook and src/sheet import the
+// core only; functions, taskpane and cli import the core (the first two also src/workbook, the last two also
+// src/sheet) and never each other; only src/addin/main.ts wires everything.
 const WRONG_WAY: [file: string, from: string][] = [
   ["src/core/ruleset/planted.ts", "../../workbook/rulesetLibrary.js"],
   ["src/core/text/planted.ts", "../../addin/main.js"],
@@ -43,6 +43,10 @@ const WRONG_WAY: [file: string, from: string][] = [
   ["src/cli/planted.ts", "../taskpane/dom.js"],
   ["src/addin/planted.ts", "../taskpane/taskpane.js"],
   ["src/addin/planted.ts", "../functions/functions.js"],
+  ["src/core/planted.ts", "../sheet/sheetArea.js"],
+  ["src/sheet/planted.ts", "../taskpane/dom.js"],
+  ["src/sheet/planted.ts", "../workbook/rulesetStore.js"],
+  ["src/functions/planted.ts", "../sheet/reviewerSheet.js"],
 ];
 
 const RIGHT_WAY: [file: string, from: string][] = [
@@ -53,6 +57,10 @@ const RIGHT_WAY: [file: string, from: string][] = [
   ["src/cli/commands/planted.ts", "../../core/index.js"],
   ["src/addin/main.ts", "../taskpane/taskpane.js"],
   ["src/addin/main.ts", "../functions/functions.js"],
+  ["src/sheet/planted.ts", "../core/index.js"],
+  ["src/taskpane/planted.ts", "../sheet/sheetHost.js"],
+  ["src/addin/planted.ts", "../sheet/sheetHost.js"],
+  ["src/cli/commands/planted.ts", "../../sheet/reviewerSheet.js"],
 ];
 
 describe("the import rules of each folder", () => {
