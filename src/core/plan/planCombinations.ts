@@ -61,7 +61,13 @@ function symbolAccess(ruleset: Ruleset, parameters: ParameterValues, input: Plan
   const modeOf = (name: string): CaseMode => input.modes?.get(name) ?? (ruleset.symbolByName.get(name) as LoadSymbol).cases;
   const statesFor = (name: string, cases: number[], mode: CaseMode): Result<SymbolState[]> => {
     const symbol = ruleset.symbolByName.get(name) as LoadSymbol;
-    const share = typeof symbol.orthogonalShare === "number" ? symbol.orthogonalShare : (parameters.numbers.get(symbol.orthogonalShare) ?? NaN);
+    const shareName = symbol.orthogonalShare;
+    const share = typeof shareName === "number" ? shareName : (parameters.numbers.get(shareName) ?? NaN);
+    if (typeof shareName === "string" && Number.isNaN(share) && mode === "orthogonal" && cases.length > 1) {
+      // A share named by a parameter the user has not given: say so, never combine with NaN.
+      const why = parameters.missing.get(shareName);
+      return fail(problem("parameter-missing", `parameter ${shareName} has no default; give its value${why ? ` (${why})` : ""}: it is the share of the other directions of ${name}`));
+    }
     const reversible = input.reversible?.get(name) ?? symbol.reversible;
     return symbolStates(symbol, cases, mode, share, reversible);
   };

@@ -215,6 +215,44 @@ describe("expansion", () => {
   });
 });
 
+describe("an orthogonal share named by a parameter", () => {
+  // The 100 % + 30 % rule of ASCE/SEI 7-16 §12.5.3 [confirmed for the 7-10 text] with its share as a parameter.
+  const file = rulesetFile({
+    symbols: {
+      D: { description: "dead load", permanence: "permanent" },
+      E: { description: "earthquake", permanence: "transient", reversible: true, cases: "orthogonal", orthogonalShare: "eShare" },
+    },
+    parameters: { eShare: { type: "number", description: "share of the other direction", min: 0, max: 1 } },
+    combinations: [{ id: "7", expression: "0.9D + 1.0E!", clause: "invented for the test" }],
+  });
+  const loaded = loadRuleset(file);
+  if (!loaded.ok) throw new Error(JSON.stringify(loaded.problems));
+  const ruleset = loaded.value;
+
+  test("must be given where two directions combine, and is refused by name, never taken as NaN", () => {
+    const t = readCaseTable(table(["D", "E:x", "E:y"]), ruleset);
+    if (!t.ok) throw new Error("refused");
+    const p = planForTable(ruleset, {}, t.value);
+    expect(p.ok).toBe(false);
+    if (p.ok) return;
+    expect(describeProblem(p.problems[0])).toBe('combination "7": parameter eShare has no default; give its value (share of the other direction): it is the share of the other directions of E');
+  });
+
+  test("is not asked for where one direction leaves nothing to share", () => {
+    const t = readCaseTable(table(["D", "E:x"]), ruleset);
+    if (!t.ok) throw new Error("refused");
+    expect(planForTable(ruleset, {}, t.value).ok).toBe(true);
+  });
+
+  test("takes the value given: 1.0 on one direction, 0.3 on the other, every sign (8 rows)", () => {
+    const t = readCaseTable(table(["D", "E:x", "E:y"]), ruleset);
+    if (!t.ok) throw new Error("refused");
+    const p = planForTable(ruleset, { eShare: 0.3 }, t.value);
+    if (!p.ok) throw new Error(JSON.stringify(p.problems));
+    expect(p.value.rowCount).toBe(8);
+  });
+});
+
 /** G, S, W with EN 1990 Table A1.1 ψ values for snow (altitude ≤ 1000 m) and wind [confirmed]. */
 function euroRuleset(expression: string): Ruleset {
   const file: RulesetFile = rulesetFile({
