@@ -4,7 +4,7 @@
  * library, whether each formula uses the library's current approved version.
  * A gate before issue: exit status 3 where one does not (docs/firm-library.md).
  */
-import { STANDING_WORDS, standingSentence, type RulesetStatus } from "../../core/index.js";
+import { approvalWords, STANDING_WORDS, standingSentence, type RulesetStatus } from "../../core/index.js";
 import { CliError, cliErrorOf, EXIT } from "../cliError.js";
 import { libraryFromFile } from "../input/libraryOption.js";
 import { auditWorkbook, type AuditReport, type FormulaFinding, type StoredFinding } from "../input/workbookAudit.js";
@@ -155,7 +155,7 @@ async function writeTables(report: AuditReport, format: "table" | "md", io: Io):
     const writer = rowWriter(format, io.out, columns);
     for (const s of report.stored) {
       const file = s.ruleset?.file;
-      await writer.row([s.stored.id, file?.version ?? "", s.status ? s.status.shortFingerprint : "", s.status ? statusWord(s.status) : "DOES NOT LOAD", s.status ? approvalWords(s.status) : s.problems.length > 0 ? "see the errors below" : "", ...(withLibrary ? [storedLibraryWord(s, report)] : [])]);
+      await writer.row([s.stored.id, file?.version ?? "", s.status ? s.status.shortFingerprint : "", s.status ? statusWord(s.status) : "DOES NOT LOAD", s.status && file ? approvalWords(s.status.approval, file.approval).cell : s.problems.length > 0 ? "see the errors below" : "", ...(withLibrary ? [storedLibraryWord(s, report)] : [])]);
     }
     await writer.end();
     if (withLibrary) for (const s of report.stored) if (s.standing && s.standing.standing !== "same") io.out.line(`${format === "md" ? "- " : "  "}${s.stored.id}: ${standingSentence(s.standing)}`);
@@ -165,17 +165,7 @@ async function writeTables(report: AuditReport, format: "table" | "md", io: Io):
   heading("Loadwright formulas");
   if (report.formulas.length === 0) io.out.line("No cell holds a Loadwright formula (LW.…).");
   else {
-    const columns: Column[] = [
-      { title: "sheet" },
-      { title: "cell" },
-      { title: "formula" },
-      { title: "ruleset" },
-      { title: "read from" },
-      { title: "content" },
-      { title: "fingerprint" },
-      { title: "verification" },
-      ...(withLibrary ? [{ title: "library" }] : []),
-    ];
+    const columns: Column[] = [...titled(FORMULA_FIELDS), ...titled(["fingerprint", "verification"]), ...(withLibrary ? titled(["library"]) : [])];
     const writer = rowWriter(format, io.out, columns);
     for (const f of report.formulas) {
       const { ruleset, from } = referenceText(f);
@@ -191,27 +181,14 @@ async function writeTables(report: AuditReport, format: "table" | "md", io: Io):
   }
 }
 
-function approvalWords(status: RulesetStatus): string {
-  return status.approval === "approved" ? "approved" : status.approval === "changed-since-approval" ? "CHANGED since approval" : "not approved";
-}
+/** What the audit says of each formula, in the table and in CSV alike. */
+const FORMULA_FIELDS = ["sheet", "cell", "formula", "ruleset", "read from", "content"];
+
+const titled = (titles: readonly string[]): Column[] => titles.map((title) => ({ title }));
 
 /** One CSV table: a line per stored ruleset, then a line per formula, told apart by `record`. */
 async function writeCsv(report: AuditReport, io: Io): Promise<void> {
-  const writer = rowWriter("csv", io.out, [
-    { title: "record" },
-    { title: "sheet" },
-    { title: "cell" },
-    { title: "formula" },
-    { title: "ruleset" },
-    { title: "read from" },
-    { title: "content" },
-    { title: "version" },
-    { title: "fingerprint" },
-    { title: "verification" },
-    { title: "approval" },
-    { title: "library" },
-    { title: "library detail" },
-  ]);
+  const writer = rowWriter("csv", io.out, titled(["record", ...FORMULA_FIELDS, "version", "fingerprint", "verification", "approval", "library", "library detail"]));
   for (const s of report.stored) {
     await writer.row([
       "stored ruleset",

@@ -4,8 +4,7 @@
  * column as well as by JSON path and combination.
  */
 import { existsSync } from "node:fs";
-import { closest, distance } from "fastest-levenshtein";
-import { describeProblem, findShippedRuleset, loadRuleset, rulesetStatus, shippedRulesets, type Problem, type Ruleset, type RulesetStatus } from "../../core/index.js";
+import { describeProblem, didYouMean, findShippedRuleset, nearest, loadRuleset, rulesetStatus, shippedRulesets, type Problem, type Ruleset, type RulesetStatus } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { readText } from "./fileAccess.js";
 import { offsetOfPath, positionOf, syntaxErrorOffset } from "./jsonLocation.js";
@@ -22,11 +21,9 @@ export function chooseRuleset(spec: string): ChosenRuleset {
   if (shipped) return { ruleset: shipped.ruleset, status: shipped.status, source: "shipped" };
   if (existsSync(spec) || /[\\/]|\.json$/i.test(spec)) return rulesetFromFile(spec);
   const ids = shippedRulesets().map((r) => r.id);
-  const nearest = ids.length > 0 ? closest(spec, ids) : undefined;
-  const guess = nearest !== undefined && distance(spec, nearest) <= Math.max(2, Math.floor(spec.length / 4)) ? nearest : undefined;
   throw new CliError(
     `--ruleset: unknown ruleset "${spec}": no shipped ruleset has this id and there is no file of that name` +
-      (ids.length > 0 ? ` (shipped: ${ids.join(", ")}${guess ? `; did you mean "${guess}"?` : ""})` : " (no rulesets are shipped yet; give a ruleset file)") +
+      (ids.length > 0 ? ` (shipped: ${ids.join(", ")}${didYouMean(nearest(spec, ids))})` : " (no rulesets are shipped yet; give a ruleset file)") +
       "; `loadwright rulesets` lists them",
   );
 }

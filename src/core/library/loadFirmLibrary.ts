@@ -8,7 +8,7 @@
  */
 import { fail, ok, problem, withinPath, type Problem, type Result } from "../problems.js";
 import { fingerprintOf, shortFingerprint } from "../ruleset/fingerprint.js";
-import { duplicateKeys, jsonSyntaxError } from "../ruleset/jsonSyntax.js";
+import { parseJsonText } from "../ruleset/jsonLimits.js";
 import { loadRuleset } from "../ruleset/loadRuleset.js";
 import type { Ruleset } from "../ruleset/model.js";
 import { schemaProblems } from "../ruleset/schemaProblems.js";
@@ -43,15 +43,9 @@ export function loadFirmLibrary(input: string | unknown): Result<FirmLibrary> {
   }
   let data: unknown = input;
   if (typeof input === "string") {
-    try {
-      data = JSON.parse(input);
-    } catch (e) {
-      return fail(problem("ruleset-json", `not valid JSON: ${jsonSyntaxError(input, e instanceof Error ? e.message : String(e))}`));
-    }
-    const twice = duplicateKeys(input);
-    if (twice.length > 0) {
-      return fail(...twice.map((d) => problem("ruleset-json", `field "${d.key}" is written twice in one object (line ${d.line}, column ${d.column}); JSON keeps only the last, so say which is meant`, { path: d.path })));
-    }
+    const read = parseJsonText(input, { what: "library" });
+    if (!read.ok) return read;
+    data = read.value;
   }
   const parsed = firmLibrarySchema.safeParse(data);
   if (!parsed.success) return fail(...schemaProblems(parsed.error.issues, firmLibrarySchema, data));

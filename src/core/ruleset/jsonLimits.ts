@@ -7,7 +7,8 @@
  * deep is refused before any recursive reader sees it.
  */
 import { countText, FORBIDDEN_KEYS, LIMITS } from "../limits.js";
-import { problem, type Problem } from "../problems.js";
+import { fail, ok, problem, type Problem, type Result } from "../problems.js";
+import { duplicateKeys, jsonSyntaxError } from "./jsonSyntax.js";
 
 /** Line and column (both 1-based) of a character offset. */
 export function lineAndColumn(text: string, offset: number): { line: number; column: number } {
@@ -92,4 +93,25 @@ export function jsonValueProblems(value: unknown, options: JsonValueOptions = {}
   };
   if (value !== null && typeof value === "object") walk(value, [], 1);
   return out;
+}
+
+/**
+ * JSON text read as every Loadwright file format reads it: within the size and
+ * nesting limits, valid JSON, and no field written twice in one object (which
+ * JSON.parse would silently settle by keeping the last).
+ */
+export function parseJsonText(text: string, options: JsonTextOptions): Result<unknown> {
+  const limit = jsonTextProblem(text, options);
+  if (limit) return fail(limit);
+  let data: unknown;
+  try {
+    data = JSON.parse(text);
+  } catch (e) {
+    return fail(problem("ruleset-json", `not valid JSON: ${jsonSyntaxError(text, e instanceof Error ? e.message : String(e))}`));
+  }
+  const twice = duplicateKeys(text);
+  if (twice.length > 0) {
+    return fail(...twice.map((d) => problem("ruleset-json", `field "${d.key}" is written twice in one object (line ${d.line}, column ${d.column}); JSON keeps only the last, so say which is meant`, { path: d.path })));
+  }
+  return ok(data);
 }

@@ -6,28 +6,19 @@
  * than the nesting limit or copies a field named __proto__.
  */
 import { LIMITS } from "../limits.js";
-import { fail, problem, type Result } from "../problems.js";
+import { fail, type Result } from "../problems.js";
 import { buildRuleset } from "./buildRuleset.js";
 import type { Ruleset } from "./model.js";
 import { rulesetSchema } from "./schema.js";
 import { schemaProblems } from "./schemaProblems.js";
-import { duplicateKeys, jsonSyntaxError } from "./jsonSyntax.js";
-import { jsonTextProblem, jsonValueProblems } from "./jsonLimits.js";
+import { jsonValueProblems, parseJsonText } from "./jsonLimits.js";
 
 export function loadRuleset(input: string | unknown): Result<Ruleset> {
   let data: unknown = input;
   if (typeof input === "string") {
-    const limit = jsonTextProblem(input, { what: "ruleset file", characters: LIMITS.rulesetCharacters });
-    if (limit) return fail(limit);
-    try {
-      data = JSON.parse(input);
-    } catch (e) {
-      return fail(problem("ruleset-json", `not valid JSON: ${jsonSyntaxError(input, e instanceof Error ? e.message : String(e))}`));
-    }
-    const twice = duplicateKeys(input);
-    if (twice.length > 0) {
-      return fail(...twice.map((d) => problem("ruleset-json", `field "${d.key}" is written twice in one object (line ${d.line}, column ${d.column}); JSON keeps only the last, so say which is meant`, { path: d.path })));
-    }
+    const read = parseJsonText(input, { what: "ruleset file", characters: LIMITS.rulesetCharacters });
+    if (!read.ok) return read;
+    data = read.value;
   }
   const unsafe = jsonValueProblems(data, { members: LIMITS.rulesetMembers });
   if (unsafe.length > 0) return fail(...unsafe);
