@@ -9,7 +9,7 @@ import { execFileSync, spawnSync } from "node:child_process";
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { dirname } from "node:path";
 import { fileURLToPath } from "node:url";
-import { parse } from "csv-parse/sync";
+import { parse, type Options } from "csv-parse/sync";
 import { demoWorkbook } from "./demoWorkbook.js";
 
 const BIN = fileURLToPath(new URL("../../../../../bin/loadwright.js", import.meta.url));
@@ -49,7 +49,7 @@ async function main(): Promise<void> {
   loadwright(["governing", data, ...common, ...criteria, "--format", "table"], false);
 
   const governing = JSON.parse(loadwright(["governing", data, ...common, ...criteria, "--format", "json"], true)) as { rows: { label: string }[] };
-  const [header, ...rows] = parse(readFileSync(data, "utf8"), { bom: true }) as string[][];
+  const [header, ...rows] = parse(readFileSync(data, "utf8"), { bom: true } satisfies Options);
   const workbook = await demoWorkbook({
     cases: { header, rows: rows.map(([id, ...values]) => [id, ...values.map(Number)]) },
     ruleset: DEMO_RULESET,

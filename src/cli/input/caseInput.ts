@@ -308,7 +308,7 @@ function caseStream(
         yield batch;
         batch.count = 0;
       }
-      if (stopped !== null) throw stopped;
+      if (stopped !== null) throw stopped instanceof Error ? stopped : new Error("reading the case file stopped on a value that is not an error");
       if (count === 0) throw new CliError(`${file}: the case table has no result rows below its header row`);
     } finally {
       await source.close();

@@ -28,7 +28,7 @@ export function offsetOfPath(text: string, path: readonly (string | number)[], c
   const root = parseTree(text);
   if (!root) return 0;
   for (let depth = path.length; depth >= 0; depth--) {
-    const node = findNodeAtLocation(root, path.slice(0, depth) as (string | number)[]);
+    const node = findNodeAtLocation(root, path.slice(0, depth));
     if (!node) continue;
     if (character !== undefined && depth === path.length && node.type === "string") return offsetInString(text, node.offset, character);
     return node.offset;

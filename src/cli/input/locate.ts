@@ -25,7 +25,7 @@ export function describeInFile(file: string, p: Problem, at: CellLocator): strin
   const { row, column, header, ...rest } = p.place;
   // What is left (JSON path, entry, character, a second cell such as a duplicate's first place) the core words;
   // the callback turns that second cell into the file's line and column too.
-  const text = describeProblem({ ...p, place: rest }, { cell: at.cell });
+  const text = describeProblem({ ...p, place: rest }, { cell: (row, column) => at.cell(row, column) });
   const named = header !== undefined ? ` (${header})` : "";
   if (row !== undefined && column !== undefined) return `${file} ${at.cell(row, column)}${named}: ${text}`;
   if (row !== undefined) return `${file} ${at.row(row)}${named}: ${text}`;

@@ -203,7 +203,7 @@ export class WorkbookPackage {
       const stop = (error: unknown) => {
         stopped = true;
         stream.destroy();
-        reject(error);
+        reject(error instanceof Error ? error : new Error(String(error)));
       };
       stream.on("data", (chunk: Buffer) => {
         if (stopped) return;

@@ -36,7 +36,7 @@ export interface FirmLibrary {
   entries: FirmLibraryEntry[];
 }
 
-export function loadFirmLibrary(input: string | unknown): Result<FirmLibrary> {
+export function loadFirmLibrary(input: unknown): Result<FirmLibrary> {
   const size = typeof input === "string" ? input.length : (JSON.stringify(input) ?? "").length;
   if (size > MAX_FIRM_LIBRARY_CHARACTERS) {
     return fail(problem("ruleset-json", `the library holds ${size.toLocaleString("en-US")} characters, more than the ${MAX_FIRM_LIBRARY_CHARACTERS.toLocaleString("en-US")} a library may hold; is this the library file?`));

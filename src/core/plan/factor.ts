@@ -46,7 +46,7 @@ export function choiceNodes(a: Arith | null, out: Arith[] = []): Arith[] {
 /** All assignments of a factor's choices, first option first. Nested choices are only assigned where reached. */
 export function choiceAssignments(a: Arith | null): ChoiceAssignment[] {
   const nodes = choiceNodes(a);
-  let assignments: Map<Arith, number>[] = [new Map()];
+  let assignments: Map<Arith, number>[] = [new Map<Arith, number>()];
   for (const node of nodes) {
     if (node.kind !== "choice") continue;
     const next: Map<Arith, number>[] = [];

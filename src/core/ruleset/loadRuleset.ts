@@ -13,7 +13,7 @@ import { rulesetSchema } from "./schema.js";
 import { schemaProblems } from "./schemaProblems.js";
 import { jsonValueProblems, parseJsonText } from "./jsonLimits.js";
 
-export function loadRuleset(input: string | unknown): Result<Ruleset> {
+export function loadRuleset(input: unknown): Result<Ruleset> {
   let data: unknown = input;
   if (typeof input === "string") {
     const read = parseJsonText(input, { what: "ruleset file", characters: LIMITS.rulesetCharacters });

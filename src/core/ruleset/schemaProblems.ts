@@ -75,7 +75,8 @@ function describeValue(value: unknown): string {
   if (Array.isArray(value)) return "a list";
   if (typeof value === "string") return `the text ${JSON.stringify(value)}`;
   if (typeof value === "object") return "an object";
-  return `${typeof value} ${String(value)}`;
+  // What is left from JSON is a number or a boolean.
+  return `${typeof value} ${JSON.stringify(value) ?? ""}`;
 }
 
 function valueAt(input: unknown, path: Path): unknown {
