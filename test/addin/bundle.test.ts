@@ -63,7 +63,7 @@ describe("the built bundle in Chromium", () => {
     ])) as unknown[][][];
     // [confirmed, steel design examples]: 1.2 × 140 + 1.6 × 420 = 840 kips (ASCE/SEI 7-16 §2.3.1 (2)).
     expect(factored.find((r) => r[0] === "2: 1.2D + 1.6L")?.[1]).toBeCloseTo(840, 9);
-    // REFERENCES.md hand check: min under 0.9D − 1.0W is 0.9 × 140 − 50 = 76.
+    // By hand (ASCE/SEI 7-10 §2.3.2, public copy https://www.scribd.com/document/611469328, combination 6): min under 0.9D − 1.0W is 0.9 × 140 − 50 = 76.
     const p = envelope.find((r) => r[0] === "P") as unknown[];
     expect(p[1]).toBeCloseTo(840, 9);
     expect(p[3]).toBeCloseTo(76, 9);

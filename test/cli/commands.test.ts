@@ -1,8 +1,8 @@
 /**
  * Each command end to end: the real command line in a child process on real
  * files, in every output format. Expected values are hand calculations with
- * the factors of ASCE/SEI 7-16 §2.3.1 (shared/REFERENCES.md: the 7-10 list,
- * [confirmed], which 7-16 keeps; numbering [memory]) on the fixture files
+ * the factors of ASCE/SEI 7-16 §2.3.1 (the list as ASCE/SEI 7-10 §2.3.2 (public copy: https://www.scribd.com/document/611469328)
+ * prints it, which 7-16 keeps [memory]; numbering [memory]) on the fixture files
  * described in fixtures/README.md.
  */
 import { readdirSync, readFileSync } from "node:fs";
@@ -19,7 +19,7 @@ describe("loadwright envelope", () => {
     const rows = csvRows(run.stdout);
     expect(rows[0]).toEqual(["result", "max", "max row", "min", "min row"]);
     const p = rows.find((r) => r[0] === "P") as string[];
-    // shared/REFERENCES.md "Hand checks" [confirmed, steel design examples]: 1.2·140 + 1.6·420 = 840; ASCE/SEI 7-16 §2.3.1 (2).
+    // AISC Design Examples, Example E.1A (American Institute of Steel Construction): 1.2·140 + 1.6·420 = 840; ASCE/SEI 7-16 §2.3.1 (2).
     expect(Number(p[1])).toBeCloseTo(840, 9);
     expect(p[2]).toBe("2: 1.2D + 1.6L");
     // ASCE/SEI 7-16 §2.3.1 (5) 0.9D + 1.0W, wind reversible (common practice (no source)): 0.9·140 − 50 = 76.
@@ -100,7 +100,7 @@ describe("loadwright envelope", () => {
     const run = await loadwright(["envelope", "reactions-rows.json", ...RULES, "--format", "json"]);
     expect(run.status).toBe(0);
     const p = JSON.parse(run.stdout).envelope[0];
-    // shared/REFERENCES.md "Hand checks" [confirmed]: 840 under 1.2D + 1.6L.
+    // AISC Design Examples, Example E.1A (American Institute of Steel Construction): 840 under 1.2D + 1.6L.
     expect(p).toEqual({ result: "P", max: { value: 840, row: "2: 1.2D + 1.6L" }, min: { value: 76, row: "5: 0.9D + W:N" } });
   });
 });
@@ -241,7 +241,7 @@ describe("loadwright explain", () => {
   test("writes out 1.2 × 140 + 1.6 × 420 = 840 for a row named by its label", async () => {
     const run = await loadwright(["explain", "reactions-rows.csv", ...RULES, "--row", "2: 1.2D + 1.6L", "--component", "P", "--format", "table"]);
     expect(run.status).toBe(0);
-    // shared/REFERENCES.md "Hand checks" [confirmed]: 1.2·140 + 1.6·420 = 168 + 672 = 840.
+    // AISC Design Examples, Example E.1A (American Institute of Steel Construction): 1.2·140 + 1.6·420 = 168 + 672 = 840.
     expect(run.stdout).toContain("P = 1.2 × 140 [D] + 1.6 × 420 [L]");
     expect(run.stdout).toContain("= 168 + 672");
     expect(run.stdout).toContain("= 840");

@@ -31,7 +31,7 @@ describe("the demo", () => {
     expect(printed).toContain("invented column base reactions");
     expect(printed).toMatch(/UNVERIFIED RULESET/);
     expect(printed).toMatch(/Caution: Results must be reviewed by a qualified, licensed engineer/);
-    // Hand checks on the invented demo data with ASCE/SEI 7-16 §2.3.1 (REFERENCES.md: list [confirmed] for 7-10, numbering [memory]):
+    // Hand checks on the invented demo data with ASCE/SEI 7-16 §2.3.1 (the list as ASCE/SEI 7-10 §2.3.2, public copy https://www.scribd.com/document/611469328 prints it; numbering [memory]):
     // (5) 0.9D + 1.0W: A1 Fz = 0.9·26 − 28 = −4.6, uplift under the wind from 180°.
     expect(printed).toMatch(/\nA1 Fz\s+80\.2\s+4: 1\.2D \+ L \+ 0\.5S - W:180\s+-4\.6\s+5: 0\.9D \+ W:180\n/);
     // (4) 1.2D + 1.0W + L + 0.5S with the 180° case reversed: A2 Fz = 57.6 + 24 + 18 + 50 = 149.6.

@@ -1,8 +1,8 @@
 /**
  * A cases-as-columns export is streamed: every result row of a large file gets
  * its envelope, checked here against a closed form of the fixture's
- * combinations (ASCE/SEI 7-16 §2.3.1 (1), (2), (4), (5); shared/REFERENCES.md,
- * list [confirmed] for the 7-10 text, numbering [memory]) computed by the test
+ * combinations (ASCE/SEI 7-16 §2.3.1 (1), (2), (4), (5); the list as
+ * ASCE/SEI 7-10 §2.3.2 (public copy: https://www.scribd.com/document/611469328) prints it, numbering [memory]) computed by the test
  * itself. Memory and speed are measured by `npm run bench`, not here.
  */
 import { execFileSync } from "node:child_process";
@@ -113,7 +113,7 @@ describe.skipIf(!terminalAvailable())("on a terminal", () => {
     execFileSync("script", ["-qec", command, typescript], { stdio: "ignore", timeout: 60_000 });
     const screen = readFileSync(typescript, "utf8");
     expect(screen).toMatch(/result\s+max\s+max row\s+min\s+min row/);
-    // shared/REFERENCES.md "Hand checks" [confirmed]: 1.2·140 + 1.6·420 = 840.
+    // AISC Design Examples (companion to the AISC Steel Construction Manual, American Institute of Steel Construction), Example E.1A: 1.2·140 + 1.6·420 = 840.
     expect(screen).toMatch(/P\s+840\s+2: 1\.2D \+ 1\.6L/);
   });
 });

@@ -1,6 +1,6 @@
 /**
- * The hand checks any combination engine must pass (shared/REFERENCES.md, "Hand
- * checks"), run through the whole engine: typed ruleset rows, case table, plan,
+ * The hand checks any combination engine must pass (each with its source below),
+ * run through the whole engine: typed ruleset rows, case table, plan,
  * envelope.
  */
 import { describe, expect, test } from "vitest";
@@ -20,7 +20,7 @@ function envelopeOf(rows: Cell[][], table: Cell[][], params = {}) {
 
 describe("hand checks", () => {
   test("a column with PD = 140 kips and PL = 420 kips gives 840 kips under 1.2D + 1.6L and 560 under D + L", () => {
-    // [confirmed, steel design examples] quoted in shared/REFERENCES.md, "Hand checks".
+    // AISC Design Examples (companion to the AISC Steel Construction Manual, American Institute of Steel Construction), Example E.1A.
     const strength = envelopeOf([["2", "1.2D + 1.6L!", "ASCE/SEI 7-16 §2.3.1 (2)"]], [["", "P"], ["D", 140], ["L", 420]]);
     expect(strength[0].max.value).toBeCloseTo(840, 9);
     const service = envelopeOf([["2", "D + L!", "ASCE/SEI 7-16 §2.4.1 (2)"]], [["", "P"], ["D", 140], ["L", 420]]);
@@ -37,7 +37,7 @@ describe("hand checks", () => {
   });
 
   test("the minimum under 0.9D − 1.0W is 0.9·D − |W| for a single reversible wind case", () => {
-    // shared/REFERENCES.md, "Hand checks": reversible loads. W acts both ways (common practice (no source)).
+    // Reversible loads: W acts both ways (common practice (no source)).
     for (const w of [35, -35]) {
       const result = envelopeOf([["5", "0.9D - 1.0W!", "§2.3.1 (5)"]], [["", "P"], ["D", 100], ["W", w]]);
       expect(result[0].min.value).toBeCloseTo(0.9 * 100 - 35, 9);

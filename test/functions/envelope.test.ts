@@ -24,7 +24,7 @@ describe("LW.ENVELOPE", () => {
     // [confirmed, steel design examples] 1.2 × 140 + 1.6 × 420 = 840 kips governs the maximum.
     expect(maxP).toBeCloseTo(840, 9);
     expect(maxPRow).toBe("2: 1.2D + 1.6L");
-    // REFERENCES.md hand check: the minimum under 0.9D − 1.0W is 0.9·D − |W| = 126 − 50 = 76 (ASCE/SEI 7-16 §2.3.1 (5)).
+    // By hand: the minimum under 0.9D − 1.0W is 0.9·D − |W| = 126 − 50 = 76 (ASCE/SEI 7-16 §2.3.1 (5); ASCE/SEI 7-10 §2.3.2, public copy https://www.scribd.com/document/611469328, combination 6).
     expect(minP).toBeCloseTo(76, 9);
     expect(minPRow).toBe("5: 0.9D + W");
     const [, maxV, maxVRow, minV, minVRow] = rowOf(table, "V");

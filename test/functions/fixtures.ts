@@ -1,6 +1,6 @@
 /**
- * Test fixtures: rulesets written for these tests from the factors in
- * shared/REFERENCES.md, with the source beside each combination. They are not
+ * Test fixtures: rulesets written for these tests from published factors, with
+ * the source beside each combination. They are not
  * shipped rulesets and not code lists; they only give the formulas something
  * to compute that a reader can check by hand.
  */
@@ -69,8 +69,7 @@ export const STRENGTH_ROWS: Cell[][] = [
 ];
 
 /**
- * A column with PD = 140 kips and PL = 420 kips [confirmed, steel design
- * examples, quoted in shared/REFERENCES.md "Hand checks"], with a shear V and a
+ * A column with PD = 140 kips and PL = 420 kips (AISC Design Examples (companion to the AISC Steel Construction Manual, American Institute of Steel Construction), Example E.1A), with a shear V and a
  * wind case added for these tests (V and W values invented for the tests).
  */
 export const COLUMN_TABLE: Cell[][] = [

@@ -28,7 +28,7 @@ describe("asce7-16-strength row counts", () => {
   const headers = ["D", "L", "Lr", "S", "R", ...WIND_12, "E:x", "E:y"];
 
   test("gives 191 rows with every term acting and 369 with the absent-load variants", () => {
-    // Every term acting (DESIGN.md's 191):
+    // Every term acting, counted by hand (the 191 of docs/design.md):
     //   1: 1.4D                                      1
     //   2: 1.2D + 1.6L + 0.5(Lr|S|R)                 3
     //   3: 1.2D + 1.6(Lr|S|R) + (L|0.5W)             3 × (1 + 24) = 75

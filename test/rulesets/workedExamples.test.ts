@@ -1,5 +1,5 @@
 /**
- * Worked examples with numbers from shared/REFERENCES.md, run through the shipped
+ * Worked examples with numbers from the public sources named beside each, run through the shipped
  * rulesets from case table to envelope. Each expected value is computed by hand in
  * the comment from the example's stated inputs; where that does not reproduce the
  * source's printed figure, both are given and the hand value is what is tested.

@@ -41,7 +41,7 @@ function messages<T>(r: Result<T>): string[] {
 }
 
 // ASCE/SEI 7-16 §2.3.1 (1), (2), (5) [list confirmed for the 7-10 text]; column loads PD = 140,
-// PL = 420 kips from the steel design examples quoted in shared/REFERENCES.md [confirmed]; the
+// PL = 420 kips from AISC Design Examples (companion to the AISC Steel Construction Manual, American Institute of Steel Construction), Example E.1A; the
 // shears and wind values are invented for this test. Every row by hand:
 //   1: 1.4D           P = 196           V = 2.8
 //   2: 1.2D + 1.6L    P = 168 + 672 = 840   V = 2.4 + 8 = 10.4
@@ -165,8 +165,9 @@ describe("explain", () => {
   });
 
   test("shows where a seismic factor comes from, with the parameters in force", () => {
-    // ICC example quoted in shared/REFERENCES.md [confirmed], ρ = 1.3, SDS = 1.10:
-    // (1.2 + 0.2·1.10) = 1.42 on D in §2.3.6 (6); (0.9 − 0.2·1.10) = 0.68 on D in (7).
+    // The §2.3.6 forms (1.2 + 0.2SDS)D and (0.9 − 0.2SDS)D with ρQE, as a City of Santa Ana basis-of-design
+    // report applies them (https://publicdocs.santa-ana.org/BuildingWeblink/0/doc/549199/Page352.aspx, Table 2.3-4);
+    // by hand with ρ = 1.3, SDS = 1.10: (1.2 + 0.2·1.10) = 1.42 on D in (6); (0.9 − 0.2·1.10) = 0.68 on D in (7).
     // D = 100 and E = 10 are invented: 1.42·100 + 1.3·10 = 155; 0.68·100 − 1.3·10 = 55.
     const seismic = setup(
       [

@@ -58,7 +58,7 @@ const terms = (text: string) => parse(text).terms.map((t) => `${t.sign}${show(t.
 
 describe("parseExpression", () => {
   test.each([
-    // Forms as printed in ASCE/SEI 7-16 §2.3.1 and §2.3.6 (shared/REFERENCES.md [confirmed for the 7-10 list]).
+    // Forms as printed in ASCE/SEI 7-16 §2.3.1 and §2.3.6 (the list as ASCE/SEI 7-10 §2.3.2, public copy https://www.scribd.com/document/611469328 prints it; the seismic forms as the Santa Ana report applies them).
     ["1.4D", ["+1.4·D"]],
     ["1.2D + 1.6L + 0.5(Lr or S or R)", ["+1.2·D", "+1.6·L", "+0.5·(+1·Lr or +1·S or +1·R)"]],
     ["1.2D + 1.6(Lr or S or R) + (L or 0.5W)", ["+1.2·D", "+1.6·(+1·Lr or +1·S or +1·R)", "+1·(+1·L or +0.5·W)"]],

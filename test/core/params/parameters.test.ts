@@ -2,7 +2,7 @@ import { describe, expect, test } from "vitest";
 import { rulesetFile } from "../../support/rulesetFile.js";
 import { describeProblem, loadRuleset, parameterPairs, planCombinations, parseParameterText, resolveParameters, type Result, type RulesetFile } from "../../../src/core/index.js";
 
-/** Parameters as ASCE/SEI 7-16 and EN 1990 use them; values from shared/REFERENCES.md. */
+/** Parameters as ASCE/SEI 7-16 and EN 1990 use them; the sources of the values stand beside them. */
 const file: RulesetFile = rulesetFile({
   id: "params-test",
   title: "parameters test",

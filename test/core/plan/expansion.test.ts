@@ -52,7 +52,8 @@ function factorRows(p: Plan): string[] {
 const table = (headers: string[]): Cell[][] => [["", "V"], ...headers.map((h) => [h, 1])];
 
 // ASCE/SEI 7-16 §2.3.1 basic combinations [list confirmed for the 7-10 text, which 7-16 keeps;
-// numbering memory] and §2.3.6 seismic forms [forms confirmed; numbering memory], shared/REFERENCES.md.
+// numbering memory: ASCE/SEI 7-10 §2.3.2 (public copy: https://www.scribd.com/document/611469328)] and §2.3.6 seismic forms [forms confirmed by the Santa Ana report cited in
+// test/core/evaluate/evaluate.test.ts; numbering memory].
 const ASCE_STRENGTH = [
   ["1", "1.4D", "§2.3.1 (1)"],
   ["2", "1.2D + 1.6L + 0.5(Lr or S or R)", "§2.3.1 (2)"],
@@ -67,7 +68,7 @@ const ASCE_TABLE = table(["D", "L", "Lr", "S", "R", ...WIND, "E:x", "E:y"]);
 
 describe("row counts", () => {
   test("ASCE 7 strength with 24 wind cases and 8 seismic cases gives 191 rows when every listed load acts", () => {
-    // DESIGN.md, "Exactness and speed": 191 rows before absent-load variants. By hand, with
+    // docs/design.md, "Exactness": hundreds of rows before absent-load variants; 191 here. By hand, with
     // 12 wind directions each way (24 wind cases) and E:x, E:y under the orthogonal rule
     // (ASCE/SEI 7-16 §12.5.3: 2 leading directions × 4 sign pairs = 8 seismic cases):
     //   1: 1   2: 3 (Lr|S|R)   3: 3 × (L + 24 W) = 75   4: 24 × 3 = 72   5: 24   6: 8   7: 8

@@ -1,5 +1,5 @@
 /**
- * The engine's exactness claim (DESIGN.md, "Exactness and speed"): envelopes
+ * The engine's exactness claim (docs/design.md, "Exactness"): envelopes
  * and governing rows found term by term equal brute-force enumeration of every
  * concrete row. The brute force here is referenceRows.ts, an independent
  * reading of the documented semantics; the engine's own row listing is held to
