@@ -25,11 +25,12 @@ const CAUTION_HELP = `\nCautions:\n${CAUTIONS.map((c) => `  - ${c}`).join("\n")}
 
 const CASE_FILE_HELP = `
 Case files:
-  CSV with a header row, or JSON (an array of rows, header row first; files ending .json).
+  CSV with a header row, JSON (an array of rows, header row first; files ending .json), or an
+  .xlsx workbook (--sheet NAME, default the first; --range A1:Q2000, default the used range).
   Cases as columns (an analysis export: result id, then one column per case such as D, L, W:N)
   or as rows (a reactions table: case headers down the first column, components across).
   The layout is detected where only one reading fits; say --layout rows|columns otherwise.
-  A cases-as-columns CSV is streamed row by row (envelope, governing, explain).`;
+  A cases-as-columns CSV or worksheet is streamed row by row (envelope, governing, explain).`;
 
 const AUDIT_HELP = `
 Examples:
@@ -54,7 +55,9 @@ function caseOptions<Args extends unknown[], Opts extends OptionValues>(command:
     .option("--layout <layout>", "where the cases are: rows, columns or auto", "auto")
     .option("--id-columns <n>", "cases as columns: how many leading columns name a result row", "1")
     .option("--delimiter <char>", 'CSV field separator: "," ";" or tab', ",")
-    .option("--map <file>", "a case map CSV: [header, symbol] or [symbol, sum|each|orthogonal] rows");
+    .option("--map <file>", "a case map CSV: [header, symbol] or [symbol, sum|each|orthogonal] rows")
+    .option("--sheet <name>", "an .xlsx case file: the worksheet to read (default: the first)")
+    .option("--range <A1:Q2000>", "an .xlsx case file: the cells to read (default: the worksheet's used range)");
 }
 
 export function buildProgram(io: Io) {
