@@ -179,16 +179,20 @@ export function sheetRows(pkg: WorkbookPackage, options: SheetRowsOptions): Shee
         return;
       }
       case "v":
-        if (cellWanted) ((capture = "v"), (text = ""));
-        return;
       case "f":
-        if (cellWanted) ((capture = "f"), (text = ""));
+        if (cellWanted) {
+          capture = local(tag.name) as "v" | "f";
+          text = "";
+        }
         return;
       case "is":
         if (cellWanted) inline = "";
         return;
       case "t":
-        if (cellWanted && inline !== null && phonetic === 0) ((capture = "t"), (text = ""));
+        if (cellWanted && inline !== null && phonetic === 0) {
+          capture = "t";
+          text = "";
+        }
         return;
       case "rPh":
         phonetic++;
@@ -209,13 +213,16 @@ export function sheetRows(pkg: WorkbookPackage, options: SheetRowsOptions): Shee
   parser.on("closetag", (tag) => {
     switch (local(tag.name)) {
       case "v":
-        if (capture === "v") ((value = text), (capture = null));
+        if (capture === "v") value = text;
+        capture = null;
         return;
       case "f":
-        if (capture === "f") ((formula = text), (capture = null));
+        if (capture === "f") formula = text;
+        capture = null;
         return;
       case "t":
-        if (capture === "t") ((inline = (inline ?? "") + text), (capture = null));
+        if (capture === "t") inline = (inline ?? "") + text;
+        capture = null;
         return;
       case "rPh":
         phonetic--;
