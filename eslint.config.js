@@ -5,6 +5,7 @@
 //   src/functions  the formulas, src/taskpane the pane, src/cli the command line: each imports
 //                  the core (and, in the add-in, the workbook module), never another adapter
 //   src/sheet      sheets as cells (the reviewer's copy, the starter block, the sheet host): imports the core only
+//   src/report     the checker's calculation report as HTML: imports the core only, no Node
 //   src/addin      the add-in: only its entry, main.ts, wires the parts together
 // Type-aware rules run on the folders listed in TYPED; the rest follow as they are brought in.
 import tseslint from "typescript-eslint";
@@ -16,6 +17,7 @@ const ADAPTERS = {
   addin: "**/addin/**",
   workbook: "**/workbook/**",
   sheet: "**/sheet/**",
+  report: "**/report/**",
 };
 
 /** A no-restricted-imports rule refusing the named folders, with why. */
@@ -30,6 +32,7 @@ export const TYPED = [
   "src/taskpane/**/*.ts",
   "src/workbook/**/*.ts",
   "src/sheet/**/*.ts",
+  "src/report/**/*.ts",
   "src/core/text/**/*.ts",
   "src/core/ruleset/**/*.ts",
   "src/cli/output/**/*.ts",
@@ -51,7 +54,7 @@ export default tseslint.config(
   {
     files: ["src/core/**/*.ts"],
     rules: {
-      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook", "sheet"], "src/core knows no adapter.", [
+      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook", "sheet", "report"], "src/core knows no adapter.", [
         { group: ["node:*", "fs", "path", "os", "child_process", "stream"], message: "src/core is pure: no Node APIs." },
         { group: ["office-*", "@microsoft/*"], message: "src/core knows no Office." },
       ]),
@@ -65,6 +68,14 @@ export default tseslint.config(
   {
     files: ["src/sheet/**/*.ts"],
     rules: { "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook"], "src/sheet is shared by the pane, the command line and the add-in: it imports the core only.") },
+  },
+  {
+    files: ["src/report/**/*.ts"],
+    rules: {
+      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook", "sheet"], "src/report is host-neutral: it imports the core only.", [
+        { group: ["node:*", "fs", "path", "os", "child_process", "stream"], message: "src/report writes text only: no Node APIs." },
+      ]),
+    },
   },
   {
     files: ["src/functions/**/*.ts"],
