@@ -165,8 +165,8 @@ export function calcReport(request: ReportRequest): Result<CalcReport> {
       rowCount: c.rowCount,
       rows: listing?.ok ? listing.value.filter((r) => r.combination === c.combination.id) : null,
     }));
-  const limitText = `${count(plan.rowCount, "concrete row")}, more than the report's row limit of ${request.rowLimit.toLocaleString("en-US")} (--row-limit)`;
-  const listingSummary = listed ? null : `The ruleset forms ${limitText} for this case table, so the combinations are listed with their row counts, not row by row. The envelope, the governing rows and their derivations are complete.`;
+  const limitText = `the ruleset forms ${count(plan.rowCount, "concrete row")} for this case table, more than the report's row limit of ${request.rowLimit.toLocaleString("en-US")} (--row-limit)`;
+  const listingSummary = listed ? null : `The combinations are listed with their row counts, not row by row: ${limitText}. The envelope, the governing rows and their derivations are complete.`;
 
   const env = envelope(plan, table);
   if (!env.ok) problems.push(...env.problems);
@@ -206,7 +206,7 @@ export function calcReport(request: ReportRequest): Result<CalcReport> {
           : "No criterion was given, so no governing rows are chosen: each result's extremes are in the envelope. Give --criterion to choose rows (e.g. \"max |[C1 top]|\").",
       derivations,
       rows: rows?.ok ? rows.value.map((r) => ({ label: r.label, combination: r.combination, values: r.values })) : null,
-      plotsNote: listed ? null : `The plots of every row's value are left out: the ruleset forms ${limitText}.`,
+      plotsNote: listed ? null : `The plots of every row's value are left out: ${limitText}.`,
     },
   };
 }

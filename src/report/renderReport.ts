@@ -337,7 +337,7 @@ function plotsSection(report: CalcReport): Html {
     "section",
     { id: "plots", class: "page" },
     el("h2", null, "Plots"),
-    el("p", null, "For each result, its factored value in every concrete row, in the order of the combination list. The black bars are the rows giving the largest and smallest value (▲ ▼), named under each chart."),
+    el("p", null, "For each result, its factored value in every concrete row, in the order of the combination list. The black bars are the rows giving the largest value (▼ above it) and the smallest (▲ below it), named under each chart."),
     table.components.map((c, r) => {
       const e = report.envelope[r];
       const chart = rowChart(
@@ -352,7 +352,7 @@ function plotsSection(report: CalcReport): Html {
         el(
           "figcaption",
           null,
-          `▲ max ${computedText(e.max.value, report.request.digits)} in row ${e.max.label}; ▼ min ${computedText(e.min.value, report.request.digits)} in row ${e.min.label}; ${rows.length.toLocaleString("en-US")} rows.`,
+          `▼ max ${computedText(e.max.value, report.request.digits)} in row ${e.max.label}; ▲ min ${computedText(e.min.value, report.request.digits)} in row ${e.min.label}; ${rows.length.toLocaleString("en-US")} rows.`,
         ),
       );
     }),

@@ -3,12 +3,12 @@
  * SVG by the report itself: rows in listing order along the bottom, grouped by
  * combination (its id under each group), values up the side on a scale of
  * round numbers with zero drawn across. Bars are grey; the row giving the
- * largest value and the one giving the smallest are black and named beside the
- * chart, with their values — so the chart reads the same printed in grey scale.
+ * largest value and the one giving the smallest are black, pointed at by ▼
+ * above and ▲ below, and named under the chart with their values — so the chart reads the same printed in grey scale.
  * Every name in it is text, escaped.
  */
 import { el, raw, type Html } from "./html.js";
-import { computedText } from "./reportNumbers.js";
+import { computedText, givenText } from "./reportNumbers.js";
 
 export interface ChartRow {
   label: string;
@@ -65,7 +65,7 @@ export function rowChart(rows: readonly ChartRow[], options: ChartOptions): Html
   for (const t of ticks) {
     const ty = y(t).toFixed(2);
     parts.push(el("line", { x1: LEFT, x2: WIDTH - RIGHT, y1: ty, y2: ty, class: t === 0 ? "zero" : "grid" }));
-    parts.push(el("text", { x: LEFT - 6, y: (y(t) + 3.5).toFixed(2), class: "tick", "text-anchor": "end" }, computedText(t, 3)));
+    parts.push(el("text", { x: LEFT - 6, y: (y(t) + 3.5).toFixed(2), class: "tick", "text-anchor": "end" }, givenText(t)));
   }
   // Bars, and the combination groups below them.
   let groupStart = 0;
