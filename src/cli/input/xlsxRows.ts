@@ -274,7 +274,7 @@ export function sheetRows(pkg: WorkbookPackage, options: SheetRowsOptions): Shee
         if (!Number.isFinite(n)) return value;
         const date = dates.dateFormat(cellStyle);
         if (date !== undefined) {
-          return { odd: `the number ${value} is shown as a date or a time (format ${date}), so it is a count of days, not a load effect or a name; format the cell as a number (or as text, for a name)` };
+          return { odd: `the number ${value} is shown as a date or a time (${date}), so it is a count of days, not a load effect or a name; format the cell as a number (or as text, for a name)` };
         }
         return n;
       }

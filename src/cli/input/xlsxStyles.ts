@@ -19,7 +19,7 @@ const STYLES = /\/styles$/;
 const BUILT_IN_DATES = new Set([14, 15, 16, 17, 18, 19, 20, 21, 22, 27, 28, 29, 30, 31, 32, 33, 34, 35, 36, 45, 46, 47, 50, 51, 52, 53, 54, 55, 56, 57, 58]);
 
 export interface DateStyles {
-  /** The format code a style shows dates with, or undefined where it shows numbers. */
+  /** How a style shows dates ("format yyyy-mm-dd", "built-in date format 14"), or undefined where it shows numbers. */
   dateFormat(style: number): string | undefined;
 }
 
@@ -60,7 +60,7 @@ export async function readDateStyles(pkg: WorkbookPackage, mainPart: string): Pr
   const dates = new Map<number, string>();
   formatOf.forEach((id, style) => {
     const code = codes.get(id);
-    if (code !== undefined ? isDateCode(code) : BUILT_IN_DATES.has(id)) dates.set(style, code ?? `built-in format ${id}`);
+    if (code !== undefined ? isDateCode(code) : BUILT_IN_DATES.has(id)) dates.set(style, code !== undefined ? `format ${code}` : `built-in date format ${id}`);
   });
   return { dateFormat: (style) => dates.get(style) };
 }
