@@ -10,6 +10,7 @@
  * envelope; the governing rows; each governing value's derivation; the plots.
  * Every number cell carries its value at full precision in `data-value`.
  */
+import { coverageText } from "../core/index.js";
 import { el, fragment, raw, type Child, type Html } from "./html.js";
 import type { CalcReport, CombinationGroup, Derivation } from "./calcReport.js";
 import { computedText, givenText } from "./reportNumbers.js";
@@ -77,7 +78,7 @@ function titleBlock(report: CalcReport): Html {
 
 function rulesetSection(report: CalcReport): Html {
   const s = report.stamp;
-  const coverage = `${s.coverage.confirmed} of ${s.coverage.total} combinations confirmed by a public source${s.coverage.unconfirmed.length > 0 ? `; not confirmed: ${s.coverage.unconfirmed.join(", ")}` : ""}`;
+  const coverage = coverageText(s.coverage);
   return el(
     "section",
     { id: "ruleset" },
