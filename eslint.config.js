@@ -5,6 +5,7 @@
 //   src/functions  the formulas, src/taskpane the pane, src/cli the command line: each imports
 //                  the core (and, in the add-in, the workbook module), never another adapter
 //   src/sheet      sheets as cells (the reviewer's copy, the starter block, the sheet host): imports the core only
+//   src/report     the checker's calculation report as HTML: imports the core only, no Node
 //   src/addin      the add-in: only its entry, main.ts, wires the parts together
 // Type-aware rules (recommendedTypeChecked, exhaustive switches) run on every source file.
 import tseslint from "typescript-eslint";
@@ -16,6 +17,7 @@ const ADAPTERS = {
   addin: "**/addin/**",
   workbook: "**/workbook/**",
   sheet: "**/sheet/**",
+  report: "**/report/**",
 };
 
 /** A no-restricted-imports rule refusing the named folders, with why. */
@@ -40,7 +42,7 @@ export default tseslint.config(
   {
     files: ["src/core/**/*.ts"],
     rules: {
-      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook", "sheet"], "src/core knows no adapter.", [
+      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook", "sheet", "report"], "src/core knows no adapter.", [
         { group: ["node:*", "fs", "path", "os", "child_process", "stream"], message: "src/core is pure: no Node APIs." },
         { group: ["office-*", "@microsoft/*"], message: "src/core knows no Office." },
       ]),
@@ -54,6 +56,14 @@ export default tseslint.config(
   {
     files: ["src/sheet/**/*.ts"],
     rules: { "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook"], "src/sheet is shared by the pane, the command line and the add-in: it imports the core only.") },
+  },
+  {
+    files: ["src/report/**/*.ts"],
+    rules: {
+      "no-restricted-imports": refuse(["functions", "taskpane", "cli", "addin", "workbook", "sheet"], "src/report is host-neutral: it imports the core only.", [
+        { group: ["node:*", "fs", "path", "os", "child_process", "stream"], message: "src/report writes text only: no Node APIs." },
+      ]),
+    },
   },
   {
     files: ["src/functions/**/*.ts"],

@@ -14,6 +14,7 @@ import { governingCommand } from "./commands/governing.js";
 import { libraryCommand } from "./commands/library.js";
 import { rulesetsCommand } from "./commands/rulesets.js";
 import { sheetCommand } from "./commands/sheet.js";
+import { REPORT_DEFAULTS, reportCommand } from "./commands/report.js";
 import { CAUTIONS } from "./output/preamble.js";
 import { VERSION } from "./version.js";
 
@@ -25,11 +26,12 @@ const CAUTION_HELP = `\nCautions:\n${CAUTIONS.map((c) => `  - ${c}`).join("\n")}
 
 const CASE_FILE_HELP = `
 Case files:
-  CSV with a header row, or JSON (an array of rows, header row first; files ending .json).
+  CSV with a header row, JSON (an array of rows, header row first; files ending .json), or an
+  .xlsx workbook (--sheet NAME, default the first; --range A1:Q2000, default the used range).
   Cases as columns (an analysis export: result id, then one column per case such as D, L, W:N)
   or as rows (a reactions table: case headers down the first column, components across).
   The layout is detected where only one reading fits; say --layout rows|columns otherwise.
-  A cases-as-columns CSV is streamed row by row (envelope, governing, explain).`;
+  A cases-as-columns CSV or worksheet is streamed row by row (envelope, governing, explain).`;
 
 const AUDIT_HELP = `
 Examples:
@@ -54,7 +56,9 @@ function caseOptions<Args extends unknown[], Opts extends OptionValues>(command:
     .option("--layout <layout>", "where the cases are: rows, columns or auto", "auto")
     .option("--id-columns <n>", "cases as columns: how many leading columns name a result row", "1")
     .option("--delimiter <char>", 'CSV field separator: "," ";" or tab', ",")
-    .option("--map <file>", "a case map CSV: [header, symbol] or [symbol, sum|each|orthogonal] rows");
+    .option("--map <file>", "a case map CSV: [header, symbol] or [symbol, sum|each|orthogonal] rows")
+    .option("--sheet <name>", "an .xlsx case file: the worksheet to read (default: the first)")
+    .option("--range <A1:Q2000>", "an .xlsx case file: the cells to read (default: the worksheet's used range)");
 }
 
 export function buildProgram(io: Io) {
@@ -169,6 +173,31 @@ export function buildProgram(io: Io) {
   )
     .addHelpText("after", `\nExamples:\n  loadwright sheet reactions.csv -r asce7-16-strength --param SDS=1.0 --out review.xlsx\n  loadwright sheet reactions.csv -r my-rules.json --criterion "max |M|" --out review.xlsx\n${CASE_FILE_HELP}\n${CAUTION_HELP}`)
     .action((file, options) => sheetCommand(file, options, io));
+
+  caseOptions(
+    program
+      .command("report")
+      .description("write the checker's calculation report: one self-contained HTML file (and, with --pdf, a PDF printed by Chromium)")
+      .argument("<file>", "case file (CSV, JSON or .xlsx)")
+      .requiredOption("-r, --ruleset <id|file>", "a shipped ruleset's id (see `loadwright rulesets`) or a ruleset file")
+      .option("-p, --param <name=value>", 'a ruleset parameter, e.g. --param SDS=1.0 (repeat it, or "SDS=1.0; rho=1.3")', collect, [] as string[])
+      .requiredOption("-o, --out <calc.html>", "the HTML file to write")
+      .option("-c, --criterion <criterion>", "a governing criterion, as for `governing` (repeat it); a reactions table without one takes the max and min of every component", collect, [] as string[])
+      .option("--title <text>", "the report's title (default: the case file's name)")
+      .option("--by <name>", "who prepared it, for the title block")
+      .option("--date <date>", "its date, for the title block")
+      .option("--pdf [file.pdf]", "also print it to PDF with headless Chromium (default: the --out name with .pdf)")
+      .option("--paper <size>", "the PDF's paper: a4 or letter", REPORT_DEFAULTS.paper)
+      .option("--chromium <path>", "the Chromium to print with (default: LOADWRIGHT_CHROMIUM, else /usr/bin/chromium and the usual places)")
+      .option("--digits <n>", "significant digits of computed values", REPORT_DEFAULTS.digits)
+      .option("--row-limit <n>", "most concrete rows listed and plotted one by one; beyond it they are summarised, saying so", REPORT_DEFAULTS.rowLimit)
+      .option("--result-limit <n>", "most results (components or result rows) a report holds; a larger table is refused", REPORT_DEFAULTS.resultLimit),
+  )
+    .addHelpText(
+      "after",
+      `\nExamples:\n  loadwright report reactions.csv -r asce7-16-strength --param SDS=1.0 --title "Grid A bases" --by "A. Engineer" --date 2026-03-02 --out calc.html\n  loadwright report export.xlsx --sheet Results --id-columns 2 -r my-rules.json --criterion "max |[C1 M]|" --out calc.html --pdf\n${CASE_FILE_HELP}\n${CAUTION_HELP}`,
+    )
+    .action((file, options) => reportCommand(file, options, io));
 
   program
     .command("audit")

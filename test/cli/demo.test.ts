@@ -17,12 +17,14 @@ import { builtPackage, ROOT } from "./harness.js";
 const DATA = join(ROOT, "demo/workshop-base-reactions.csv");
 let printed = "";
 let workbookPath = "";
+let reportPath = "";
 
 beforeAll(async () => {
   const dir = mkdtempSync(join(tmpdir(), "loadwright-demo-"));
   workbookPath = join(dir, "demo.xlsx");
   const script = join(await builtPackage(), "build/cli/src/cli/demo/runDemo.js");
-  const { stdout } = await promisify(execFile)(process.execPath, [script, "--data", DATA, "--out", workbookPath], { cwd: ROOT });
+  reportPath = join(dir, "report.html");
+  const { stdout } = await promisify(execFile)(process.execPath, [script, "--data", DATA, "--out", workbookPath, "--report", reportPath], { cwd: ROOT });
   printed = stdout;
 });
 
@@ -39,6 +41,14 @@ describe("the demo", () => {
     expect(printed).toContain("G1: max [A2 Fz] → 4: 1.2D + L + 0.5S - W:180");
     expect(printed).toContain("G2: min [A1 Fz] → 5: 0.9D + W:180");
     expect(printed).toContain("Wrote ");
+  });
+
+  test("writes the calculation report of the same table, criteria and parameters", () => {
+    expect(printed).toContain(`Wrote ${reportPath}: the calculation report`);
+    const html = readFileSync(reportPath, "utf8");
+    expect(html).toContain("<h1>Workshop column bases (invented demo)</h1>");
+    // The derivation of G1 (max [A2 Fz]): (4) 1.2D + 1.0W + L + 0.5S with W:180 reversed, 57.6 + 24 + 18 + 50 = 149.6 (hand check above).
+    expect(html).toMatch(/data-component="A2 Fz" data-total="149.6"/);
   });
 
   test("writes the case table into the workbook as numbers, labelled invented", async () => {

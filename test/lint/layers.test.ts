@@ -47,6 +47,9 @@ const WRONG_WAY: [file: string, from: string][] = [
   ["src/sheet/planted.ts", "../taskpane/dom.js"],
   ["src/sheet/planted.ts", "../workbook/rulesetStore.js"],
   ["src/functions/planted.ts", "../sheet/reviewerSheet.js"],
+  ["src/report/planted.ts", "../cli/cliError.js"],
+  ["src/report/planted.ts", "node:fs"],
+  ["src/core/planted.ts", "../report/html.js"],
 ];
 
 const RIGHT_WAY: [file: string, from: string][] = [
@@ -61,6 +64,8 @@ const RIGHT_WAY: [file: string, from: string][] = [
   ["src/taskpane/planted.ts", "../sheet/sheetHost.js"],
   ["src/addin/planted.ts", "../sheet/sheetHost.js"],
   ["src/cli/commands/planted.ts", "../../sheet/reviewerSheet.js"],
+  ["src/report/planted.ts", "../core/index.js"],
+  ["src/cli/commands/planted.ts", "../../report/calcReport.js"],
 ];
 
 describe("the import rules of each folder", () => {

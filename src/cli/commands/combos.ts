@@ -13,7 +13,7 @@ import { jsonNumber, numberText } from "../output/cells.js";
 import { chooseFormat } from "../output/format.js";
 import { jsonHeader } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
-import { delimiterOf, idColumnsOf, layoutOf, planOrFail, rowLimitOf, writePreamble, type Io, type RulesetOptions, withRowLimitHint } from "./common.js";
+import { caseFileOptions, delimiterOf, planOrFail, rowLimitOf, writePreamble, type Io, type RulesetOptions, withRowLimitHint } from "./common.js";
 
 export interface CombosOptions extends RulesetOptions {
   cases?: string;
@@ -21,6 +21,8 @@ export interface CombosOptions extends RulesetOptions {
   idColumns: string;
   delimiter: string;
   map?: string;
+  sheet?: string;
+  range?: string;
   rowLimit: string;
 }
 
@@ -33,7 +35,7 @@ export async function combosCommand(options: CombosOptions, io: Io): Promise<voi
   if (options.cases !== undefined) {
     const delimiter = delimiterOf(options.delimiter);
     const map = await caseMapFrom(options.map, chosen.ruleset, delimiter);
-    const input = await openCases(options.cases, chosen.ruleset, { layout: layoutOf(options.layout), idColumns: idColumnsOf(options.idColumns), delimiter, map });
+    const input = await openCases(options.cases, chosen.ruleset, caseFileOptions(options, delimiter, map));
     shape = tableShape(input);
     if (input.kind === "stream") await input.close();
   }

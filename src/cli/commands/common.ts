@@ -3,10 +3,10 @@
  * map and case file options, the plan, and writing the preamble where the
  * format wants it.
  */
-import { describeProblem, planForTable, type CaseTable, type Plan, type Problem } from "../../core/index.js";
+import { describeProblem, planForTable, type CaseMap, type CaseTable, type Plan, type Problem } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { caseMapFrom } from "../input/caseMapOption.js";
-import { openCases, tableShape, type CaseInput, type Layout } from "../input/caseInput.js";
+import { openCases, tableShape, type CaseFileOptions, type CaseInput, type Layout } from "../input/caseInput.js";
 import { parameterInput } from "../input/paramOption.js";
 import { chooseRuleset, type ChosenRuleset } from "../input/rulesetOption.js";
 import { chooseFormat, isMachineFormat, type Format } from "../output/format.js";
@@ -24,6 +24,9 @@ export interface CaseOptions extends RulesetOptions {
   idColumns: string;
   delimiter: string;
   map?: string;
+  /** An .xlsx case file: the worksheet and the range. */
+  sheet?: string;
+  range?: string;
 }
 
 export interface Io {
@@ -50,7 +53,7 @@ export async function prepare(file: string, options: CaseOptions, io: Io): Promi
   const parameters = parameterInput(options.param);
   const delimiter = delimiterOf(options.delimiter);
   const map = await caseMapFrom(options.map, chosen.ruleset, delimiter);
-  const input = await openCases(file, chosen.ruleset, { layout: layoutOf(options.layout), idColumns: idColumnsOf(options.idColumns), delimiter, map });
+  const input = await openCases(file, chosen.ruleset, caseFileOptions(options, delimiter, map));
   const plan = planOrFail(chosen, parameters, tableShape(input));
   return { chosen, input, plan, format };
 }
@@ -73,6 +76,11 @@ export async function writePreamble(io: Io, prepared: Pick<Prepared, "chosen" | 
   const target = isMachineFormat(prepared.format) ? io.err : io.out;
   for (const line of preambleLines(prepared.chosen, prepared.plan, prepared.format)) target.line(line);
   await io.err.flush();
+}
+
+/** What the case file options say, read and checked. */
+export function caseFileOptions(options: CaseOptions, delimiter: string, map: CaseMap): CaseFileOptions {
+  return { layout: layoutOf(options.layout), idColumns: idColumnsOf(options.idColumns), delimiter, map, sheet: options.sheet, range: options.range };
 }
 
 export function layoutOf(option: string): Layout {

@@ -15,7 +15,7 @@ import { openCases, type CaseStream } from "../input/caseInput.js";
 import { jsonNumber, numberText } from "../output/cells.js";
 import { jsonHeader, streamedJsonStart } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
-import { delimiterOf, finiteOrFail, idColumnsOf, layoutOf, noRowsError, prepare, rowLimitOf, writePreamble, type CaseOptions, type Io, type Prepared, withRowLimitHint } from "./common.js";
+import { caseFileOptions, delimiterOf, finiteOrFail, idColumnsOf, noRowsError, prepare, rowLimitOf, writePreamble, type CaseOptions, type Io, type Prepared, withRowLimitHint } from "./common.js";
 import { resultsOf } from "./results.js";
 import { caseMapFrom } from "../input/caseMapOption.js";
 
@@ -120,7 +120,7 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
   const reopen = async (): Promise<CaseStream> => {
     const delimiter = delimiterOf(options.delimiter);
     const map = await caseMapFrom(options.map, chosen.ruleset, delimiter);
-    const again = await openCases(file, chosen.ruleset, { layout: layoutOf(options.layout), idColumns: idColumnsOf(options.idColumns), delimiter, map });
+    const again = await openCases(file, chosen.ruleset, caseFileOptions(options, delimiter, map));
     if (again.kind !== "stream") throw new CliError(`${file}: the file changed while it was read`);
     return again;
   };

@@ -38,7 +38,7 @@ export async function* resultBatches(input: CaseInput, label: string): AsyncGene
   try {
     for await (const batch of input.batches) {
       progress.update(input.bytesRead());
-      yield { count: batch.count, cases: input.cases.length, ids: batch.ids, values: batch.values, lines: batch.lines, where: (n) => `line ${batch.lines[n]} (${batch.ids[n]})` };
+      yield { count: batch.count, cases: input.cases.length, ids: batch.ids, values: batch.values, lines: batch.lines, where: (n) => `${input.rowPlace ? input.rowPlace(batch.lines[n]) : `line ${batch.lines[n]}`} (${batch.ids[n]})` };
     }
   } finally {
     progress.stop();

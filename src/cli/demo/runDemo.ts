@@ -1,13 +1,14 @@
 /**
  * `npm run demo`: runs the command line on the invented workshop (demo/),
  * printing the envelope and the governing rows, then writes the demo workbook
- * with the same case table and live LW.* formulas.
+ * with the same case table and live LW.* formulas, and the calculation report
+ * a checker reads (HTML, beside the workbook).
  *
- *   node build/cli/src/cli/demo/runDemo.js [--data FILE] [--out FILE.xlsx]
+ *   node build/cli/src/cli/demo/runDemo.js [--data FILE] [--out FILE.xlsx] [--report FILE.html]
  */
 import { execFileSync, spawnSync } from "node:child_process";
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
-import { dirname } from "node:path";
+import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { parse, type Options } from "csv-parse/sync";
 import { demoWorkbook } from "./demoWorkbook.js";
@@ -39,6 +40,7 @@ function loadwright(args: string[], capture: boolean): string {
 async function main(): Promise<void> {
   const data = option("--data", "demo/workshop-base-reactions.csv");
   const out = option("--out", "demo/out/loadwright-demo.xlsx");
+  const report = option("--report", join(dirname(out), "loadwright-demo-report.html"));
   const common = ["--ruleset", DEMO_RULESET, ...DEMO_PARAMETERS.flatMap(([n, v]) => ["--param", `${n}=${v}`])];
   const criteria = DEMO_CRITERIA.flatMap((c) => ["--criterion", c]);
 
@@ -59,9 +61,13 @@ async function main(): Promise<void> {
   });
   mkdirSync(dirname(out), { recursive: true });
   writeFileSync(out, workbook);
+  const reportArgs = [data, ...common, ...criteria, "--title", "Workshop column bases (invented demo)", "--by", "Loadwright demo", "--date", "2026-01-01", "--out", report];
+  process.stdout.write(`\n$ loadwright report ${reportArgs.map((a) => (/[\s|[\]]/.test(a) ? `"${a}"` : a)).join(" ")}\n`);
+  loadwright(["report", ...reportArgs], false);
   process.stdout.write(
     `\nWrote ${out}: the case table and live LW.ENVELOPE, LW.GOVERNING, LW.COMBOS, LW.EXPLAIN and LW.RULESET formulas.\n` +
-      "Open it in Excel with the Loadwright add-in loaded (docs/demo.md); without the add-in the formulas show #NAME?.\n",
+      "Open it in Excel with the Loadwright add-in loaded (docs/demo.md); without the add-in the formulas show #NAME?.\n" +
+      `Open ${report} in a browser for the calculation report a checker reads (docs/report.md); add --pdf to print it.\n`,
   );
 }
 

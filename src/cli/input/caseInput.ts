@@ -31,6 +31,7 @@ import { CsvSource } from "./csvSource.js";
 import { checkReadable, readText } from "./fileAccess.js";
 import { offsetOfPath, positionOf, syntaxErrorOffset } from "./jsonLocation.js";
 import { csvLocator, describeInFile, type CellLocator } from "./locate.js";
+import { openXlsxCases } from "./xlsxCases.js";
 
 export type Layout = Orientation | "auto";
 
@@ -42,6 +43,9 @@ export interface CaseFileOptions {
   map: CaseMap;
   /** How records are found: in the file's bytes ("bytes", the default), or by csv-parse alone (the general reader the scanner is held to). */
   reader?: "bytes" | "csv-parse";
+  /** An .xlsx workbook: the worksheet (default the first) and the range (default the used range). */
+  sheet?: string | undefined;
+  range?: string | undefined;
 }
 
 /** Result rows of a cases-as-columns file, a batch at a time; the batch is reused, so read it before asking for the next. */
@@ -75,6 +79,8 @@ export interface CaseStream {
   bytesRead(): number;
   /** Stop reading (the rows are not wanted, or not all of them). */
   close(): Promise<void>;
+  /** Where a row is, by the line `lines` gives for it: "Results!17:17" in a workbook; "line 17" where absent. */
+  rowPlace?: (line: number) => string;
 }
 
 export interface CaseFile {
@@ -93,6 +99,8 @@ export function tableShape(input: CaseInput): CaseTable {
 
 export async function openCases(file: string, ruleset: Ruleset, options: CaseFileOptions): Promise<CaseInput> {
   if (/\.json$/i.test(file)) return openJsonCases(file, ruleset, options);
+  if (/\.xlsx$/i.test(file)) return openXlsxCases(file, ruleset, options);
+  if (options.sheet !== undefined || options.range !== undefined) throw new CliError(`${file}: --sheet and --range read an .xlsx workbook; this is not one (its name does not end in .xlsx)`);
   const totalBytes = checkReadable(file, "case file");
   const source = await CsvSource.open(file, options.delimiter, options.reader ?? "bytes");
   const first = await firstRecord(source);
@@ -138,7 +146,7 @@ async function firstRecord(source: CsvSource): Promise<CsvRecord | null> {
   return null;
 }
 
-function lastNonBlank(cells: Cell[]): number {
+export function lastNonBlank(cells: Cell[]): number {
   let last = cells.length - 1;
   while (last >= 0 && isBlank(cells[last])) last--;
   return last;
@@ -176,7 +184,7 @@ function wholeTable(file: string, records: CsvRecord[], ruleset: Ruleset, option
  * mistyped header is reported where it is ("Q" names no load symbol) rather
  * than as an undecidable layout. Otherwise the core decides (or says it cannot).
  */
-function leaningOrientation(matrix: Cell[][], idColumns: number, reads: (cell: Cell) => boolean): Layout {
+export function leaningOrientation(matrix: Cell[][], idColumns: number, reads: (cell: Cell) => boolean): Layout {
   const header = matrix[0].slice(idColumns).filter((c) => !isBlank(c));
   const firstColumn = matrix.slice(1).map((r) => r[0]).filter((c) => !isBlank(c));
   const inHeader = header.filter(reads).length;

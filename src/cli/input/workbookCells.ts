@@ -23,7 +23,7 @@ const WORKBOOK_TYPES = [
   "application/vnd.ms-excel.template.macroEnabled.main+xml",
 ];
 const OTHER_DOCUMENTS: [RegExp, string][] = [
-  [/ms-excel\.sheet\.binary/, "a binary workbook (.xlsb), which the audit does not read: save it as .xlsx"],
+  [/ms-excel\.sheet\.binary/, "a binary workbook (.xlsb), which Loadwright does not read: save it as .xlsx"],
   [/wordprocessingml/, "a Word document, not a workbook"],
   [/presentationml/, "a PowerPoint presentation, not a workbook"],
 ];

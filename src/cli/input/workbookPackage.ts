@@ -7,6 +7,7 @@
  * the file and the part.
  */
 import { readFileSync } from "node:fs";
+import { Readable } from "node:stream";
 import JSZip from "jszip";
 import { CliError } from "../cliError.js";
 import { checkReadable, fileErrorText } from "./fileAccess.js";
@@ -18,6 +19,20 @@ export const MAX_WORKBOOK_BYTES = 200 * 1024 * 1024;
 export const MAX_PART_BYTES = 256 * 1024 * 1024;
 /** All parts read in one audit, inflated. */
 export const MAX_READ_BYTES = 1024 * 1024 * 1024;
+
+/** The sizes a package is refused beyond, and what it is read for (in the messages). */
+export interface PackageLimits {
+  /** On disk. */
+  workbookBytes: number;
+  /** One part, inflated. */
+  partBytes: number;
+  /** All parts read, inflated. */
+  readBytes: number;
+  /** "the audit", "a case file": what the file is read for, in the refusals. */
+  use: string;
+}
+
+export const AUDIT_LIMITS: PackageLimits = { workbookBytes: MAX_WORKBOOK_BYTES, partBytes: MAX_PART_BYTES, readBytes: MAX_READ_BYTES, use: "the audit" };
 
 const PACKAGE_RELATIONSHIPS = "http://schemas.openxmlformats.org/package/2006/relationships";
 const CONTENT_TYPES = "http://schemas.openxmlformats.org/package/2006/content-types";
@@ -42,11 +57,12 @@ export class WorkbookPackage {
     private readonly zip: JSZip,
     private readonly defaults: Map<string, string>,
     private readonly overrides: Map<string, string>,
+    private readonly limits: PackageLimits,
   ) {}
 
-  static async open(file: string): Promise<WorkbookPackage> {
+  static async open(file: string, limits: PackageLimits = AUDIT_LIMITS): Promise<WorkbookPackage> {
     const size = checkReadable(file, "workbook");
-    if (size > MAX_WORKBOOK_BYTES) throw new CliError(`${file}: the file is ${megabytes(size)}, larger than the ${megabytes(MAX_WORKBOOK_BYTES)} a workbook may be for an audit`);
+    if (size > limits.workbookBytes) throw new CliError(`${file}: the file is ${megabytes(size)}, larger than the ${megabytes(limits.workbookBytes)} a workbook may be for ${limits.use}`);
     let bytes: Buffer;
     try {
       bytes = readFileSync(file);
@@ -55,7 +71,7 @@ export class WorkbookPackage {
     }
     if (bytes.length >= 8 && bytes.readUInt32BE(0) === 0xd0cf11e0 && bytes.readUInt32BE(4) === 0xa1b11ae1) {
       throw new CliError(
-        `${file}: an Excel 97-2003 workbook (.xls) or a password-protected workbook (both are compound files, not zip packages); the audit reads .xlsx workbooks: save it as .xlsx without a password`,
+        `${file}: an Excel 97-2003 workbook (.xls) or a password-protected workbook (both are compound files, not zip packages); Loadwright reads .xlsx workbooks: save it as .xlsx without a password`,
       );
     }
     let zip: JSZip;
@@ -65,7 +81,7 @@ export class WorkbookPackage {
       const reason = e instanceof Error ? e.message.replace(/ If it is, see .*$/, "") : String(e);
       throw new CliError(`${file}: not a zip package, so not an .xlsx workbook (${reason.replace(/\s*\.?$/, "")})`);
     }
-    const pkg = new WorkbookPackage(file, zip, new Map(), new Map());
+    const pkg = new WorkbookPackage(file, zip, new Map(), new Map(), limits);
     if (!pkg.has("[Content_Types].xml")) throw new CliError(`${file}: a zip file without [Content_Types].xml, so not an Office document; is this an .xlsx workbook?`);
     const types = await pkg.xml("[Content_Types].xml");
     if (types.local !== "Types" || types.uri !== CONTENT_TYPES) throw pkg.partError("[Content_Types].xml", types, `is not a content types part (its root element is <${types.local}>)`);
@@ -183,6 +199,64 @@ export class WorkbookPackage {
     return new CliError(`${this.file}: ${part} line ${at.line}, column ${at.column}: ${message}`);
   }
 
+  /**
+   * The part's text piece by piece, pulled by the reader: the part is inflated
+   * only as fast as the pieces are taken, so a worksheet of a million rows is
+   * read in flat memory however slowly its rows are used (UTF-8 only, as
+   * SpreadsheetML parts are written).
+   */
+  async *textPieces(part: string): AsyncGenerator<string> {
+    const entry = this.zipEntry(part);
+    if (!entry) throw new CliError(`${this.file}: the part ${part} is missing from the package`);
+    // JSZip's stream is an old-style Readable; wrapping it gives back-pressure and async iteration.
+    const source = entry.nodeStream("nodebuffer");
+    const stream = new Readable().wrap(source);
+    const decoder = new TextDecoder("utf-8", { fatal: true });
+    let length = 0;
+    let first = true;
+    try {
+      for await (const chunk of stream as AsyncIterable<Buffer>) {
+        length += chunk.length;
+        this.read += chunk.length;
+        const beyond = this.beyondLimits(part, length);
+        if (beyond) throw beyond;
+        let text: string;
+        try {
+          text = decoder.decode(chunk, { stream: true });
+        } catch {
+          throw new CliError(`${this.file}: ${part}: the part is not text in UTF-8; the package is damaged`);
+        }
+        if (first && text !== "") {
+          text = text.replace(/^\uFEFF/, "");
+          first = false;
+        }
+        if (text !== "") yield text;
+      }
+    } catch (e) {
+      if (e instanceof CliError) throw e;
+      throw new CliError(`${this.file}: ${part}: the part cannot be inflated from the zip package, which is damaged (${e instanceof Error ? e.message : String(e)})`);
+    } finally {
+      stream.destroy();
+    }
+  }
+
+  /** The part's size inflated, as the zip's directory declares it (0 where it is not known): for a progress bar only. */
+  partSize(part: string): number {
+    // JSZip keeps the directory's figure on an internal field its types do not name.
+    const entry = this.zipEntry(part);
+    const data: unknown = entry ? Reflect.get(entry, "_data") : undefined;
+    const size: unknown = typeof data === "object" && data !== null ? Reflect.get(data, "uncompressedSize") : undefined;
+    return typeof size === "number" && Number.isFinite(size) ? size : 0;
+  }
+
+  /** The refusal of a part that inflates beyond the limits, or null. */
+  private beyondLimits(part: string, length: number): CliError | null {
+    const { partBytes, readBytes, use } = this.limits;
+    if (length > partBytes) return new CliError(`${this.file}: ${part}: the part inflates to more than ${megabytes(partBytes)}; ${use} refuses it (a damaged or hostile package?)`);
+    if (this.read > readBytes) return new CliError(`${this.file}: ${part}: the parts read so far inflate to more than ${megabytes(readBytes)}; ${use} refuses the package (a damaged or hostile package?)`);
+    return null;
+  }
+
   private zipEntry(part: string): JSZip.JSZipObject | null {
     const name = partName(part);
     const exact = this.zip.file(name);
@@ -209,8 +283,8 @@ export class WorkbookPackage {
         if (stopped) return;
         length += chunk.length;
         this.read += chunk.length;
-        if (length > MAX_PART_BYTES) return stop(new CliError(`${this.file}: ${part}: the part inflates to more than ${megabytes(MAX_PART_BYTES)}; the audit refuses it (a damaged or hostile package?)`));
-        if (this.read > MAX_READ_BYTES) return stop(new CliError(`${this.file}: ${part}: the parts read so far inflate to more than ${megabytes(MAX_READ_BYTES)}; the audit refuses the package (a damaged or hostile package?)`));
+        const beyond = this.beyondLimits(part, length);
+        if (beyond) return stop(beyond);
         if (!onChunk) {
           chunks.push(chunk);
           return;
