@@ -7,16 +7,22 @@
  * it makes the ruleset library, hands it to the formulas and to the pane.
  * Inside Excel stored rulesets live in the workbook's settings; in a browser
  * they live in local storage, and a demo ruleset is put there on first use.
+ * It also hands the pane the host's theme and where the cautions'
+ * acknowledgement is kept.
  */
+import "./withoutEval.js";
 import { startTaskPane } from "../taskpane/taskpane.js";
+import { CautionAcknowledgement } from "../workbook/cautionAcknowledgement.js";
 import { RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import { RulesetStore } from "../workbook/rulesetStore.js";
 import { browserStorageBackend } from "./browserStorageBackend.js";
 import { seedDemoRuleset } from "./demoRuleset.js";
 import { officeSettingsBackend } from "./officeSettingsBackend.js";
+import { officeTheme } from "./officeTheme.js";
 
 const hasOffice = typeof Office !== "undefined";
-const browserStore = () => new RulesetStore(browserStorageBackend(window.localStorage));
+const browserBackend = () => browserStorageBackend(window.localStorage);
+const browserStore = () => new RulesetStore(browserBackend());
 const library = new RulesetLibrary(hasOffice ? new RulesetStore(officeSettingsBackend()) : browserStore());
 
 // Formulas first: Excel may call them as soon as they are associated.
@@ -36,5 +42,7 @@ void officeHost().then(async (host) => {
     if (hasOffice) library.useStore(browserStore());
     await seedDemoRuleset(library.store);
   }
-  startTaskPane(document, { inExcel, library });
+  // The cautions' acknowledgement is kept where the stored rulesets are: with the workbook, or in the browser.
+  const cautions = new CautionAcknowledgement(inExcel ? officeSettingsBackend() : browserBackend());
+  startTaskPane(document, { inExcel, library, cautions, theme: officeTheme() });
 });

@@ -14,6 +14,8 @@ export type ProblemKind =
   // the rulesets a workbook can name
   | "ruleset-unknown"
   | "ruleset-store"
+  // other values kept with a workbook (the cautions' acknowledgement)
+  | "settings-write"
   // expressions
   | "expression-syntax"
   | "expression-unknown-name"

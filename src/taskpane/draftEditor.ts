@@ -68,7 +68,8 @@ class DraftEditor {
     this.storeBar = el(doc, "div", { id: "lw-store-bar", class: "store-bar" });
     this.modeProblem = el(doc, "p", { class: "problem", role: "alert", id: "lw-mode-problem" });
     this.modeProblem.hidden = true;
-    this.summary = el(doc, "div", { id: "lw-draft-problems" });
+    // The problem list is announced as it changes (it is rewritten only when it does).
+    this.summary = el(doc, "div", { id: "lw-draft-problems", "aria-live": "polite" });
     this.body = el(doc, "div", { id: "lw-draft-body" });
     this.keptProblem = el(doc, "p", { class: "problem", role: "alert" });
     this.keptProblem.hidden = true;
