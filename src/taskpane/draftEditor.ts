@@ -7,7 +7,7 @@
 import { formatPath } from "../core/index.js";
 import { comboList } from "./comboList.js";
 import { isObject, parseJson, type JsonObject } from "./dataPath.js";
-import { button, el } from "./dom.js";
+import { button, el, trackHeight } from "./dom.js";
 import { checkDraft, type DraftCheck, type EditorProblem } from "./draftCheck.js";
 import { draftId } from "./draftLabel.js";
 import { renderStatus, renderSummary } from "./draftStatus.js";
@@ -114,6 +114,7 @@ class DraftEditor {
     );
     this.renderBody();
     this.validate();
+    trackHeight(this.storeBar, "--lw-bottom-height");
   }
 
   /** Keeps the text in browser storage, and says so where storage refused it. */

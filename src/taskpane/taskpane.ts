@@ -10,6 +10,7 @@ import type { RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import { approveView } from "./approveView.js";
 import { renderCautionLine } from "./cautionLine.js";
 import { compareView } from "./compareView.js";
+import { trackHeight } from "./dom.js";
 import { DraftStore } from "./draftStore.js";
 import { editorView } from "./editorView.js";
 import { libraryView } from "./libraryView.js";
@@ -54,7 +55,7 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
     ? `In Excel: formulas LW.* are available; stored rulesets live in ${options.library.where}.`
     : `In a browser (demo, no Excel): stored rulesets live in ${options.library.where}.`;
   renderCautionLine(doc, $("lw-cautions"), { record: options.cautions, keptIn: storedWhere });
-  keepClearOfTopBar(doc, $("lw-top"));
+  trackHeight($("lw-top"), "--lw-top-height");
 
   const storage = options.draftStorage !== undefined ? options.draftStorage : safeLocalStorage(doc);
   const notice = $("lw-notice");
@@ -100,15 +101,6 @@ function viewNamed(name: ViewName): (typeof VIEWS)[number] {
   const view = VIEWS.find((v) => v.name === name);
   if (!view) throw new Error(`no view ${name}`);
   return view;
-}
-
-/** The top bar sticks while scrolling: what scrolls into view (a focused field, say) stops below it. */
-function keepClearOfTopBar(doc: Document, bar: HTMLElement): void {
-  const root = doc.documentElement;
-  const update = () => root.style.setProperty("--lw-top-height", `${Math.ceil(bar.getBoundingClientRect().height)}px`);
-  const View = doc.defaultView;
-  if (View && "ResizeObserver" in View) new View.ResizeObserver(update).observe(bar);
-  update();
 }
 
 function safeLocalStorage(doc: Document): Storage | null {

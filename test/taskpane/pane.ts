@@ -20,10 +20,24 @@ export interface Pane {
   close(): Promise<void>;
 }
 
-export async function openPane(): Promise<Pane> {
+export interface PaneSetup {
+  width?: number;
+  height?: number;
+  /** Run in the page before its own scripts, on every load. */
+  initScript?: string;
+  /** What the page gets as Office's script (office.js); an empty script unless given. */
+  officeScript?: string;
+}
+
+export async function openPane(setup: PaneSetup = {}): Promise<Pane> {
   const server: StaticServer = await serveDirectory(await builtAddin());
   const browser: Browser = await openBrowser();
-  await browser.page.setViewportSize({ width: PANE_WIDTH, height: 900 });
+  await browser.page.setViewportSize({ width: setup.width ?? PANE_WIDTH, height: setup.height ?? 900 });
+  if (setup.initScript !== undefined) await browser.page.addInitScript(setup.initScript);
+  const officeScript = setup.officeScript;
+  if (officeScript !== undefined) {
+    await browser.page.route("https://appsforoffice.microsoft.com/**", (route) => route.fulfill({ status: 200, contentType: "text/javascript", body: officeScript }));
+  }
   await browser.page.goto(`${server.origin}/taskpane.html`);
   await browser.page.waitForSelector("#lw-rulesets li[data-ruleset-id]");
   return {
@@ -43,6 +57,15 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   mkdirSync(dir, { recursive: true });
   const file = path.join(dir, `${name}.png`);
   await page.screenshot({ path: file, fullPage: true });
+  return file;
+}
+
+/** A screenshot of what the pane shows without scrolling, as a user first sees it. */
+export async function screenshotInView(page: Page, name: string): Promise<string> {
+  const dir = path.join(ROOT, "build", "taskpane-screenshots");
+  mkdirSync(dir, { recursive: true });
+  const file = path.join(dir, `${name}.png`);
+  await page.screenshot({ path: file });
   return file;
 }
 
