@@ -66,7 +66,7 @@ function entryItem(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
     doc,
     "li",
     { "data-ruleset-id": entry.id, "data-source": entry.source, "data-status": entry.status?.verification ?? "invalid", class: selected ? "selected" : "" },
-    el(doc, "div", { class: "entry-line" }, verificationBadge(doc, entry.status), pick, f ? el(doc, "span", { class: "entry-version" }, f.version) : null),
+    el(doc, "div", { class: "entry-line" }, verificationBadge(doc, entry.status), pick, f ? el(doc, "span", { class: "entry-version truncate", title: f.version }, f.version) : null),
     el(doc, "div", { class: "entry-title truncate", title: f?.title ?? entry.problem ?? "" }, f?.title ?? entry.problem ?? ""),
     el(
       doc,
