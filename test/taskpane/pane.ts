@@ -25,8 +25,8 @@ export interface PaneSetup {
   height?: number;
   /** Run in the page before its own scripts, on every load. */
   initScript?: string;
-  /** What the page gets as Office's script (office.js); an empty script unless given. */
-  officeScript?: string;
+  /** What the page gets as Office's script (office.js), asked for on every load; an empty script unless given. */
+  officeScript?: () => string;
 }
 
 export async function openPane(setup: PaneSetup = {}): Promise<Pane> {
@@ -36,7 +36,7 @@ export async function openPane(setup: PaneSetup = {}): Promise<Pane> {
   if (setup.initScript !== undefined) await browser.page.addInitScript(setup.initScript);
   const officeScript = setup.officeScript;
   if (officeScript !== undefined) {
-    await browser.page.route("https://appsforoffice.microsoft.com/**", (route) => route.fulfill({ status: 200, contentType: "text/javascript", body: officeScript }));
+    await browser.page.route("https://appsforoffice.microsoft.com/**", (route) => route.fulfill({ status: 200, contentType: "text/javascript", body: officeScript() }));
   }
   await browser.page.goto(`${server.origin}/taskpane.html`);
   await browser.page.waitForSelector("#lw-rulesets li[data-ruleset-id]");
