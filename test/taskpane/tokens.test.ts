@@ -44,9 +44,10 @@ describe("taskpane.css", () => {
     }
   });
 
-  test("uses only tokens it declares (and the top bar's height, set by the pane)", () => {
+  test("uses only tokens it declares, and the heights of the sticking bars the pane sets (--lw-…)", () => {
     const used = new Set([...css.matchAll(/var\(--([\w-]+)/g)].map((m) => m[1]));
-    const undeclared = [...used].filter((name) => !light.has(name) && name !== "lw-top-height");
+    const undeclared = [...used].filter((name) => !light.has(name) && !/^lw-/.test(name));
     expect(undeclared).toEqual([]);
+    expect([...used].filter((name) => /^lw-/.test(name)).sort()).toEqual(["lw-bottom-height", "lw-top-height"]);
   });
 });
