@@ -57,7 +57,8 @@ describe("CautionAcknowledgement", () => {
 
 describe("the compact caution line", () => {
   test("names each caution in a few words, in the catalogue's order", () => {
-    // docs/design.md, "Cautions": review by a qualified, licensed engineer; the adopted edition governs; verify the rulesets.
+    // docs/task-pane.md, "The caution line": one line of a few words for each caution of docs/design.md, "Cautions"
+    // (review by a qualified, licensed engineer; the adopted edition governs; verify the shipped rulesets).
     expect(compactCautionLine()).toBe("Review by a licensed engineer; adopted code governs; verify rulesets");
   });
 });
