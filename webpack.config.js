@@ -1,5 +1,5 @@
 // Builds the add-in into dist/: one bundle (formulas and task pane share the
-// runtime), taskpane.html, functions.json generated from the JSDoc of
+// runtime), taskpane.html and its stylesheet, functions.json generated from the JSDoc of
 // src/functions/functions.ts, the icons, and manifest.xml with the URLs it is
 // served from. `--env origin=https://host` builds for another origin than the
 // development server's.
@@ -22,7 +22,8 @@ export default (env = {}, argv = {}) => {
   return {
     mode: production ? "production" : "development",
     context: here,
-    devtool: production ? "source-map" : "eval-cheap-module-source-map",
+    // No eval-based source maps: the pane's Content-Security-Policy forbids eval in development too.
+    devtool: production ? "source-map" : "cheap-module-source-map",
     entry: { taskpane: "./src/addin/main.ts" },
     output: {
       path: env.outputPath ? path.resolve(env.outputPath) : path.resolve(here, "dist"),
@@ -51,6 +52,7 @@ export default (env = {}, argv = {}) => {
       new CopyWebpackPlugin({
         patterns: [
           { from: "assets/*.png", to: "assets/[name][ext]" },
+          { from: "src/taskpane/taskpane.css", to: "taskpane.css" },
           {
             from: "manifest.xml",
             to: "manifest.xml",

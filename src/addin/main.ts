@@ -9,10 +9,13 @@
  * followed by a recalculation of the workbook (the store's one hook), and the
  * pane's Sheet view works on the workbook; in a browser rulesets live in local
  * storage, a demo ruleset is put there on first use, and the Sheet view works
- * on an invented demo table kept in the page.
+ * on an invented demo table kept in the page. It also hands the pane the
+ * host's theme and where the cautions' acknowledgement is kept.
  */
+import "./withoutEval.js";
 import { connectSheet } from "../taskpane/sheetConnection.js";
 import { startTaskPane } from "../taskpane/taskpane.js";
+import { CautionAcknowledgement } from "../workbook/cautionAcknowledgement.js";
 import { RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import { RulesetStore } from "../workbook/rulesetStore.js";
 import { browserStorageBackend } from "./browserStorageBackend.js";
@@ -20,10 +23,12 @@ import { seedDemoRuleset } from "./demoRuleset.js";
 import { demoSheetHost } from "./demoSheetHost.js";
 import { excelSheetHost } from "./excelSheetHost.js";
 import { officeSettingsBackend } from "./officeSettingsBackend.js";
+import { officeTheme } from "./officeTheme.js";
 import { recalculateWorkbook } from "./recalculateWorkbook.js";
 
 const hasOffice = typeof Office !== "undefined";
-const browserStore = () => new RulesetStore(browserStorageBackend(window.localStorage));
+const browserBackend = () => browserStorageBackend(window.localStorage);
+const browserStore = () => new RulesetStore(browserBackend());
 const library = new RulesetLibrary(hasOffice ? new RulesetStore(officeSettingsBackend(), { afterWrite: recalculateWorkbook }) : browserStore());
 
 // Formulas first: Excel may call them as soon as they are associated.
@@ -44,5 +49,7 @@ void officeHost().then(async (host) => {
     await seedDemoRuleset(library.store);
   }
   connectSheet(inExcel ? excelSheetHost() : demoSheetHost());
-  startTaskPane(document, { inExcel, library });
+  // The cautions' acknowledgement is kept where the stored rulesets are: with the workbook, or in the browser.
+  const cautions = new CautionAcknowledgement(inExcel ? officeSettingsBackend() : browserBackend());
+  startTaskPane(document, { inExcel, library, cautions, theme: officeTheme() });
 });

@@ -81,7 +81,7 @@ export { resultSizes, RULESET_FIELDS, type ResultSize, type ResultSizes } from "
 
 // What every surface says (one vocabulary)
 export { statusText, approvalWords, approvedByText, VERIFICATION_WORDS, type ApprovalRecord, type ApprovalWords, type StatusText } from "./text/statusText.js";
-export { CAUTIONS, cautionLine, fullCautions, shortCautions, type Caution } from "./text/cautions.js";
+export { CAUTIONS, cautionLine, compactCautionLine, fullCautions, shortCautions, type Caution } from "./text/cautions.js";
 export { sourceText, shippedTwin, type RulesetOrigin } from "./text/sourceText.js";
 export { coverageText, fromMemoryText, fromMemoryTexts, FROM_MEMORY_LEAD } from "./text/coverage.js";
 export { planOmissions, omissionTexts, type PlanOmissions, type SkippedCombination } from "./text/omissions.js";

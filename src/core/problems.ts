@@ -20,6 +20,8 @@ export type ProblemKind =
   // the firm library: reading it from a file or an address, and where a workbook keeps its address
   | "library-read"
   | "library-link"
+  // other values kept with a workbook (the cautions' acknowledgement)
+  | "settings-write"
   // expressions
   | "expression-syntax"
   | "expression-unknown-name"

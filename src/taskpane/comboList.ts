@@ -50,7 +50,7 @@ function problemBox(doc: Document, problems: readonly Problem[], paramsText: str
     const position = p.place.position ?? positionOf(paramsText, p.place.header);
     return `params${position === null ? "" : `, character ${position}`}: ${p.message}`;
   });
-  return el(doc, "p", { class: "problem" }, lines.join("\n"));
+  return el(doc, "p", { class: "problem", role: "alert" }, lines.join("\n"));
 }
 
 /** 1-based character position of "name =" in the typed parameters. */

@@ -67,9 +67,18 @@ export function compareView(ctx: PaneContext): HTMLElement {
   const after = select("lw-compare-after", pair.after);
   const params = el(doc, "input", { id: "lw-compare-params", type: "text", autocomplete: "off", spellcheck: "false", "aria-describedby": "lw-compare-params-hint" });
   const result = el(doc, "div", { id: "lw-compare-result", "aria-live": "polite" });
+  // Under each list, the chosen ruleset in full: a narrow list may cut its label, never its UNVERIFIED or approval.
+  const beforeSide = el(doc, "div", { id: "lw-compare-before-side" });
+  const afterSide = el(doc, "div", { id: "lw-compare-after-side" });
+  before.setAttribute("aria-describedby", "lw-compare-before-side");
+  after.setAttribute("aria-describedby", "lw-compare-after-side");
   const render = () => {
     ctx.comparePair = { before: before.value, after: after.value };
-    result.replaceChildren(...comparison(ctx, all.find((c) => c.value === before.value), all.find((c) => c.value === after.value), params.value));
+    const a = all.find((c) => c.value === before.value);
+    const b = all.find((c) => c.value === after.value);
+    beforeSide.replaceChildren(...(a ? [comparedSide(doc, a)] : []));
+    afterSide.replaceChildren(...(b ? [comparedSide(doc, b)] : []));
+    result.replaceChildren(...comparison(ctx, a, b, params.value));
   };
   before.addEventListener("change", render);
   after.addEventListener("change", render);
@@ -78,8 +87,8 @@ export function compareView(ctx: PaneContext): HTMLElement {
     doc,
     "div",
     { id: "lw-compare" },
-    el(doc, "div", { class: "field" }, el(doc, "label", { for: "lw-compare-before" }, "Before"), before),
-    el(doc, "div", { class: "field" }, el(doc, "label", { for: "lw-compare-after" }, "After"), after),
+    el(doc, "div", { class: "field" }, el(doc, "label", { for: "lw-compare-before" }, "Before"), before, beforeSide),
+    el(doc, "div", { class: "field" }, el(doc, "label", { for: "lw-compare-after" }, "After"), after, afterSide),
     el(
       doc,
       "div",
@@ -101,13 +110,14 @@ export function compareView(ctx: PaneContext): HTMLElement {
 /** What a comparison needs of each side (the Firm library view compares a stored copy with the library's version). */
 export type Compared = Pick<Candidate, "label" | "ruleset" | "status" | "why">;
 
-function side(doc: Document, word: string, c: Compared): HTMLElement {
+/** One side of a comparison in full: label, title, UNVERIFIED, approval, fingerprint. */
+export function comparedSide(doc: Document, c: Compared): HTMLElement {
   const f = c.ruleset?.file;
   return el(
     doc,
     "div",
     { class: "compare-side" },
-    el(doc, "p", {}, el(doc, "strong", {}, `${word}: `), c.label, f ? ` — ${f.title}` : ""),
+    el(doc, "p", {}, c.label, f ? ` — ${f.title}` : ""),
     c.status && f ? el(doc, "p", { class: "badges" }, verificationBadge(doc, c.status), " ", approvalBadge(doc, f, c.status), " ", el(doc, "span", { class: "fingerprint" }, c.status.shortFingerprint)) : null,
   );
 }
@@ -115,14 +125,13 @@ function side(doc: Document, word: string, c: Compared): HTMLElement {
 export function comparison(ctx: PaneContext, a: Compared | undefined, b: Compared | undefined, paramsText: string): HTMLElement[] {
   const { doc } = ctx;
   if (!a || !b) return [el(doc, "p", {}, "Choose two rulesets.")];
-  const head = [side(doc, "Before", a), side(doc, "After", b)];
   if (!a.ruleset || !b.ruleset) {
-    return [...head, el(doc, "p", { class: "problem" }, `${!a.ruleset ? `Before: ${a.why ?? "does not load"}` : `After: ${b.why ?? "does not load"}`}; only rulesets that load can be compared.`)];
+    return [el(doc, "p", { class: "problem" }, `${!a.ruleset ? `Before: ${a.why ?? "does not load"}` : `After: ${b.why ?? "does not load"}`}; only rulesets that load can be compared.`)];
   }
   const compared = compareForPane(a.ruleset, b.ruleset, paramsText);
-  if (!compared.ok) return [...head, el(doc, "p", { class: "problem", id: "lw-compare-problem" }, compared.problems.map((p) => `parameters, ${describeProblem(p)}`).join("\n"))];
+  if (!compared.ok) return [el(doc, "p", { class: "problem", id: "lw-compare-problem" }, compared.problems.map((p) => `parameters, ${describeProblem(p)}`).join("\n"))];
   const { comparison: c, combinations, rowProblems, notUsed } = compared.value;
-  const out: HTMLElement[] = [...head];
+  const out: HTMLElement[] = [];
   if (c.same) {
     out.push(el(doc, "p", { class: "ok-box", id: "lw-compare-same" }, "Same content: the fingerprints are equal (approval records aside)."));
     return out;

@@ -23,6 +23,18 @@ export function uniqueId(prefix: string): string {
   return `${prefix}-${counter}`;
 }
 
+/**
+ * Keeps a CSS variable on the root element equal to an element's height, for a bar that sticks to an edge
+ * of the pane: the stylesheet pads scrolling by it, so what scrolls into view (a focused field) is not under the bar.
+ */
+export function trackHeight(element: HTMLElement, variable: string): void {
+  const doc = element.ownerDocument;
+  const update = () => doc.documentElement.style.setProperty(variable, `${Math.ceil(element.getBoundingClientRect().height)}px`);
+  const view = doc.defaultView;
+  if (view && "ResizeObserver" in view) new view.ResizeObserver(update).observe(element);
+  update();
+}
+
 /** The local date as YYYY-MM-DD (what an approval records as "today"). */
 export function todayText(now: Date = new Date()): string {
   const pad = (n: number) => String(n).padStart(2, "0");

@@ -7,7 +7,7 @@
 import { formatPath } from "../core/index.js";
 import { comboList } from "./comboList.js";
 import { isObject, parseJson, type JsonObject } from "./dataPath.js";
-import { button, el } from "./dom.js";
+import { button, el, trackHeight } from "./dom.js";
 import { checkDraft, type DraftCheck, type EditorProblem } from "./draftCheck.js";
 import { draftId } from "./draftLabel.js";
 import { renderStatus, renderSummary } from "./draftStatus.js";
@@ -68,7 +68,8 @@ class DraftEditor {
     this.storeBar = el(doc, "div", { id: "lw-store-bar", class: "store-bar" });
     this.modeProblem = el(doc, "p", { class: "problem", role: "alert", id: "lw-mode-problem" });
     this.modeProblem.hidden = true;
-    this.summary = el(doc, "div", { id: "lw-draft-problems" });
+    // The problem list is announced as it changes (it is rewritten only when it does).
+    this.summary = el(doc, "div", { id: "lw-draft-problems", "aria-live": "polite" });
     this.body = el(doc, "div", { id: "lw-draft-body" });
     this.keptProblem = el(doc, "p", { class: "problem", role: "alert" });
     this.keptProblem.hidden = true;
@@ -113,6 +114,7 @@ class DraftEditor {
     );
     this.renderBody();
     this.validate();
+    trackHeight(this.storeBar, "--lw-bottom-height");
   }
 
   /** Keeps the text in browser storage, and says so where storage refused it. */

@@ -57,6 +57,10 @@ export function renderStatus(ctx: PaneContext, draft: Draft, check: DraftCheck, 
 }
 
 export function renderSummary(doc: Document, summary: HTMLElement, problems: readonly EditorProblem[], local: ReadonlyMap<string, string>, mode: EditorMode, goTo: (p: EditorProblem) => void): void {
+  // The list sits in a live region: the same problems again are not rewritten, so not announced again.
+  const signature = JSON.stringify([mode, problems.map((p) => [p.full, p.spot?.line, p.spot?.column]), [...local]]);
+  if (summary.dataset.signature === signature) return;
+  summary.dataset.signature = signature;
   if (problems.length === 0 && local.size === 0) {
     summary.replaceChildren();
     return;

@@ -1,9 +1,9 @@
 /**
- * Library: every ruleset a formula can name, stored first, then shipped, each
- * with its verification (UNVERIFIED in words), approval, source and
- * fingerprint, and its standing against the firm library where one is read;
- * the selected one's details, what to do with it, and its combination list as
- * LW.COMBOS gives it.
+ * Library: every ruleset a formula can name, stored first, then shipped, as a
+ * dense list — each entry its verification (UNVERIFIED in words), id, version,
+ * title, approval, source, fingerprint and, where a firm library is read, its
+ * standing against it. The chosen one's details open in place under it: what
+ * to do with it, and its combination list as LW.COMBOS gives it.
  */
 import { stampLine, type Ruleset, type RulesetFile, type RulesetStatus } from "../core/index.js";
 import { entryOrigin, type LibraryEntry } from "../workbook/rulesetLibrary.js";
@@ -21,7 +21,7 @@ import { approvalBadge, coverageLine, fromMemoryBox, sourceLine, verificationBad
 export function libraryView(ctx: PaneContext): HTMLElement {
   const { doc } = ctx;
   const { entries, storeProblem } = ctx.library();
-  if (ctx.selected === null || !entries.some((e) => e.id === ctx.selected)) ctx.selected = entries[0]?.id ?? null;
+  if (ctx.selected !== null && !entries.some((e) => e.id === ctx.selected)) ctx.selected = null;
   const root = el(doc, "div", { id: "lw-library" });
   if (storeProblem) root.append(el(doc, "p", { id: "lw-store-problem", class: "problem", role: "alert" }, storeProblem));
   root.append(firmLibraryLine(ctx));
@@ -37,11 +37,17 @@ export function libraryView(ctx: PaneContext): HTMLElement {
       ),
     );
   }
+  if (entries.length === 0) {
+    root.append(el(doc, "p", {}, "No ruleset is shipped or stored yet."));
+    return root;
+  }
   const list = el(doc, "ul", { id: "lw-rulesets", class: "ruleset-list", "aria-label": "Rulesets" });
-  for (const entry of entries) list.append(entryItem(ctx, entry));
+  for (const entry of entries) {
+    list.append(entryItem(ctx, entry));
+    if (entry.id === ctx.selected) list.append(el(doc, "li", { class: "entry-details" }, details(ctx, entry)));
+  }
   root.append(list);
-  const chosen = entries.find((e) => e.id === ctx.selected);
-  root.append(chosen ? details(ctx, chosen) : el(doc, "p", {}, "No ruleset is shipped or stored yet."));
+  if (ctx.selected === null) root.append(el(doc, "p", { class: "hint" }, "Choose a ruleset to see its details, its combination list and what can be done with it."));
   return root;
 }
 
@@ -55,16 +61,16 @@ function entryItem(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
     () => {
       ctx.selected = entry.id;
       ctx.show("library");
-      doc.querySelector<HTMLElement>(`#lw-rulesets li[data-ruleset-id="${entry.id}"] button.ruleset`)?.focus();
+      doc.querySelector<HTMLElement>(`#lw-rulesets li[data-ruleset-id="${CSS.escape(entry.id)}"] button.ruleset`)?.focus();
     },
-    { class: "ruleset", "aria-pressed": selected ? "true" : "false" },
+    { class: "ruleset truncate", title: entry.id, "aria-expanded": selected ? "true" : "false", "aria-controls": selected ? "lw-selected" : undefined },
   );
   return el(
     doc,
     "li",
     { "data-ruleset-id": entry.id, "data-source": entry.source, "data-status": entry.status?.verification ?? "invalid", class: selected ? "selected" : "" },
-    el(doc, "div", { class: "entry-line" }, verificationBadge(doc, entry.status), " ", pick, f ? el(doc, "span", { class: "muted" }, ` ${f.version}`) : null),
-    el(doc, "div", { class: "entry-title" }, f?.title ?? entry.problem ?? ""),
+    el(doc, "div", { class: "entry-line" }, verificationBadge(doc, entry.status), pick, f ? el(doc, "span", { class: "entry-version truncate", title: f.version }, f.version) : null),
+    el(doc, "div", { class: "entry-title truncate", title: f?.title ?? entry.problem ?? "" }, f?.title ?? entry.problem ?? ""),
     el(
       doc,
       "div",
@@ -79,14 +85,31 @@ function entryItem(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
 
 function details(ctx: PaneContext, entry: LibraryEntry): HTMLElement {
   const { doc } = ctx;
-  const root = el(doc, "section", { id: "lw-selected", "aria-labelledby": "lw-selected-title" }, el(doc, "h2", { id: "lw-selected-title" }, entry.id));
+  const close = button(
+    doc,
+    "Close",
+    () => {
+      ctx.selected = null;
+      ctx.show("library");
+      doc.querySelector<HTMLElement>(`#lw-rulesets li[data-ruleset-id="${CSS.escape(entry.id)}"] button.ruleset`)?.focus();
+    },
+    { class: "small", "aria-label": `Close the details of ${entry.id}` },
+  );
+  const root = el(
+    doc,
+    "section",
+    { id: "lw-selected", "aria-labelledby": "lw-selected-title" },
+    el(doc, "div", { class: "details-head" }, el(doc, "h2", { id: "lw-selected-title" }, entry.id), close),
+  );
   const { ruleset, status } = entry;
   if (!ruleset || !status) {
     root.append(...unloadable(ctx, entry));
+    if (entry.source === "stored") root.append(removeControl(ctx, entry));
   } else {
-    root.append(...standing(ctx, entry, ruleset, status), ...actions(ctx, entry, ruleset.file), ...combinationList(ctx, entry, ruleset, status));
+    root.append(...standing(ctx, ruleset, status), ...actions(ctx, entry, ruleset.file));
+    if (entry.source === "stored") root.append(removeControl(ctx, entry));
+    root.append(...record(ctx, entry, ruleset, status), ...combinationList(ctx, entry, ruleset, status));
   }
-  if (entry.source === "stored") root.insertBefore(removeControl(ctx, entry), root.querySelector("h3"));
   return root;
 }
 
@@ -108,20 +131,28 @@ function unloadable(ctx: PaneContext, entry: LibraryEntry): HTMLElement[] {
   ];
 }
 
-/** Identity, verification and approval, how much its sources confirm, what is from memory, fingerprint, source, notes. */
-function standing(ctx: PaneContext, entry: LibraryEntry, ruleset: Ruleset, status: RulesetStatus): HTMLElement[] {
+/** Identity, verification and approval, and how much its sources confirm: what decides whether to use it, first. */
+function standing(ctx: PaneContext, ruleset: Ruleset, status: RulesetStatus): HTMLElement[] {
   const { doc } = ctx;
   const f = ruleset.file;
   return [
     el(doc, "p", { class: "entry-title" }, f.title),
-    el(doc, "p", {}, `${f.standard.name} ${f.standard.edition}${f.standard.clauses ? ` — ${f.standard.clauses}` : ""}`, f.basis ? ` · ${f.basis}` : "", ` · version ${f.version}`),
+    el(doc, "p", { class: "detail" }, `${f.standard.name} ${f.standard.edition}${f.standard.clauses ? ` — ${f.standard.clauses}` : ""}`, f.basis ? ` · ${f.basis}` : "", ` · version ${f.version}`),
     el(doc, "p", { class: "badges" }, verificationBadge(doc, status), " ", approvalBadge(doc, f, status)),
     el(doc, "p", { id: "lw-selected-summary" }, status.summary),
     coverageLine(doc, status, "lw-selected-coverage"),
+  ];
+}
+
+/** What is from memory (in full), the approval note, fingerprint, source and notes. */
+function record(ctx: PaneContext, entry: LibraryEntry, ruleset: Ruleset, status: RulesetStatus): HTMLElement[] {
+  const { doc } = ctx;
+  const f = ruleset.file;
+  return [
     ...(status.verification === "unverified" ? [fromMemoryBox(doc, f)] : []),
     ...(f.approval.note ? [el(doc, "p", {}, `Approval note: ${f.approval.note}`)] : []),
-    el(doc, "p", {}, "Fingerprint ", el(doc, "span", { class: "fingerprint", id: "lw-selected-fingerprint" }, status.fingerprint)),
-    el(doc, "p", {}, sourceLine(entry, ctx.storedWhere)),
+    el(doc, "p", { class: "detail" }, "Fingerprint ", el(doc, "span", { class: "fingerprint", id: "lw-selected-fingerprint" }, status.fingerprint)),
+    el(doc, "p", { class: "detail" }, sourceLine(entry, ctx.storedWhere)),
     ...(f.notes ?? []).map((note) => el(doc, "p", { class: "note" }, note)),
   ];
 }

@@ -1,38 +1,49 @@
 /**
- * The task pane: the cautions, always in view, and five views over the
- * rulesets a formula can name — Library (status, approval, source,
+ * The task pane's shell: the caution line, always in view, the strip of views
+ * over the rulesets a formula can name — Library (status, approval, source,
  * fingerprint, combination list), Editor (drafts kept apart from the stored
- * copies), Compare, Approve, and Import / export. Views are plain DOM, built
- * from the shared state each time they are shown.
+ * copies), Compare, Approve, and Import / export — a notice line, and the
+ * theme. Views are plain DOM, built from the shared state each time they are shown.
  */
-import { fullCautions } from "../core/index.js";
+import type { CautionAcknowledgement } from "../workbook/cautionAcknowledgement.js";
 import type { RulesetLibrary } from "../workbook/rulesetLibrary.js";
 import { approveView } from "./approveView.js";
+import { renderCautionLine } from "./cautionLine.js";
 import { compareView } from "./compareView.js";
-import { el } from "./dom.js";
+import { trackHeight } from "./dom.js";
 import { DraftStore } from "./draftStore.js";
 import { editorView } from "./editorView.js";
 import { firmLibraryView } from "./firmLibraryView.js";
 import { libraryView } from "./libraryView.js";
 import { libraryFunctions, type PaneContext, type ViewName } from "./paneContext.js";
 import { sheetView } from "./sheetView.js";
+import { tabStrip, type TabSpec } from "./tabStrip.js";
+import { applyTheme, type PaneTheme } from "./theme.js";
 import { transferView } from "./transferView.js";
 
 export interface PaneOptions {
   inExcel: boolean;
   /** The rulesets formulas can name: the pane lists, stores and approves them here. */
   library: RulesetLibrary;
+  /** Whether the cautions were read for this workbook, kept with it. */
+  cautions: CautionAcknowledgement;
+  /** The host's theme where it reports one; null follows the system's preference. */
+  theme: PaneTheme | null;
   /** Where drafts are kept; the browser's local storage unless given. */
   draftStorage?: Storage | null;
 }
 
-const VIEWS: { name: ViewName; label: string; render: (ctx: PaneContext) => HTMLElement }[] = [
+/**
+ * The views, in the order of the strip. The strip holds seven at 320 px; Import / export stays
+ * last (End goes there). A view's icon is the one of its name in icons.ts unless `icon` names another.
+ */
+const VIEWS: (TabSpec<ViewName> & { render: (ctx: PaneContext) => HTMLElement })[] = [
   { name: "library", label: "Library", render: libraryView },
   { name: "editor", label: "Editor", render: editorView },
   { name: "compare", label: "Compare", render: compareView },
   { name: "approve", label: "Approve", render: approveView },
-  { name: "firm-library", label: "Firm library", render: firmLibraryView },
-  { name: "sheet", label: "Sheet", render: sheetView },
+  { name: "firm-library", label: "Firm library", icon: "firm", render: firmLibraryView },
+  { name: "sheet", label: "Sheet", icon: "sheet", render: sheetView },
   { name: "transfer", label: "Import / export", render: transferView },
 ];
 
@@ -42,14 +53,16 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
     if (!found) throw new Error(`taskpane.html has no #${id}`);
     return found;
   };
+  applyTheme(doc, options.theme);
+  const storedWhere = options.inExcel ? "this workbook" : "this browser";
   $("lw-mode").textContent = options.inExcel
     ? `In Excel: formulas LW.* are available; stored rulesets live in ${options.library.where}.`
     : `In a browser (demo, no Excel): stored rulesets live in ${options.library.where}.`;
-  $("lw-cautions").replaceChildren(...fullCautions().map((text) => el(doc, "p", {}, text)));
+  renderCautionLine(doc, $("lw-cautions"), { record: options.cautions, keptIn: storedWhere });
+  trackHeight($("lw-top"), "--lw-top-height");
 
   const storage = options.draftStorage !== undefined ? options.draftStorage : safeLocalStorage(doc);
   const notice = $("lw-notice");
-  const tabs = $("lw-tabs");
   const panel = $("lw-view");
   let current: ViewName = "library";
   // A notice given just before a view is switched to (after storing, say) is shown there; older ones go.
@@ -58,7 +71,7 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
   const ctx: PaneContext = {
     doc,
     inExcel: options.inExcel,
-    storedWhere: options.inExcel ? "this workbook" : "this browser",
+    storedWhere,
     drafts: new DraftStore(storage),
     selected: null,
     openDraft: null,
@@ -77,33 +90,14 @@ export function startTaskPane(doc: Document, options: PaneOptions): void {
       if (!same && !noticeFresh) notice.hidden = true;
       noticeFresh = false;
       current = view;
-      renderTabs();
+      tabs.render(view);
       panel.setAttribute("aria-labelledby", `lw-tab-${view}`);
       panel.setAttribute("data-view", view);
       panel.replaceChildren(viewNamed(view).render(ctx));
       doc.defaultView?.scrollTo({ top: scroll });
     },
   };
-
-  const renderTabs = () => {
-    tabs.replaceChildren(
-      ...VIEWS.map((v) => {
-        const selected = v.name === current;
-        const tab = el(doc, "button", { type: "button", role: "tab", id: `lw-tab-${v.name}`, "aria-selected": String(selected), "aria-controls": "lw-view", tabindex: selected ? "0" : "-1" }, v.label);
-        tab.addEventListener("click", () => ctx.show(v.name));
-        return tab;
-      }),
-    );
-  };
-  // Tabs follow the usual keyboard pattern: arrows move between them, Home and End to the ends.
-  tabs.addEventListener("keydown", (e) => {
-    const i = VIEWS.findIndex((v) => v.name === current);
-    const to = e.key === "ArrowRight" ? (i + 1) % VIEWS.length : e.key === "ArrowLeft" ? (i + VIEWS.length - 1) % VIEWS.length : e.key === "Home" ? 0 : e.key === "End" ? VIEWS.length - 1 : -1;
-    if (to < 0) return;
-    e.preventDefault();
-    ctx.show(VIEWS[to].name);
-    doc.getElementById(`lw-tab-${VIEWS[to].name}`)?.focus();
-  });
+  const tabs = tabStrip(doc, $("lw-tabs"), VIEWS, (view) => ctx.show(view));
   ctx.show("library");
 }
 

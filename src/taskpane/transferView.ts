@@ -6,7 +6,7 @@
  * Export gives any shipped or stored ruleset (or a draft that loads) as a
  * .json download, or as text to copy where the host blocks downloads.
  */
-import { compareRulesets, shippedRulesets, type RulesetFile } from "../core/index.js";
+import { compareRulesets, shippedRulesets, type RulesetFile, type RulesetStatus } from "../core/index.js";
 import { withAfterWrite } from "./afterWrite.js";
 import { button, el } from "./dom.js";
 import { checkDraft } from "./draftCheck.js";
@@ -131,35 +131,43 @@ function importResult(ctx: PaneContext, text: string, source: string): HTMLEleme
 
 function exportSection(ctx: PaneContext): HTMLElement {
   const { doc } = ctx;
-  const files = new Map<string, RulesetFile>();
+  const files = new Map<string, { file: RulesetFile; status: RulesetStatus | null }>();
   const options: HTMLElement[] = [];
   for (const e of ctx.library().entries) {
     if (!e.ruleset) continue;
     const key = `${e.source}:${e.id}`;
-    files.set(key, e.ruleset.file);
+    files.set(key, { file: e.ruleset.file, status: e.status });
     options.push(el(doc, "option", { value: key }, `${e.id} (${e.source})${unverifiedSuffix(e.status)}`));
   }
   for (const d of ctx.drafts.list()) {
     const checked = checkDraft(d.text, d.base.approval);
     if (!checked.ruleset) continue;
-    files.set(`draft:${d.key}`, checked.ruleset.file);
+    files.set(`draft:${d.key}`, { file: checked.ruleset.file, status: checked.status });
     options.push(el(doc, "option", { value: `draft:${d.key}` }, `draft ${draftId(d)} (not stored)${unverifiedSuffix(checked.status)}`));
   }
-  const pick = el(doc, "select", { id: "lw-export-pick" }, ...options);
+  const pick = el(doc, "select", { id: "lw-export-pick", "aria-describedby": "lw-export-standing" }, ...options);
   const selectedKey = [...files.keys()].find((k) => k.endsWith(`:${ctx.selected ?? ""}`) && !k.startsWith("draft:"));
   if (selectedKey) pick.value = selectedKey;
   const shown = el(doc, "textarea", { id: "lw-export-text", class: "mono", rows: "10", readonly: "", wrap: "off", "aria-label": "The ruleset as JSON text, to copy" });
   shown.hidden = true;
-  const current = () => files.get(pick.value);
+  // A choice in a narrow list may be cut short: its verification and approval are said in full under it.
+  const standing = el(doc, "p", { class: "badges", id: "lw-export-standing" });
+  const current = () => files.get(pick.value)?.file;
+  const showStanding = () => {
+    const chosen = files.get(pick.value);
+    standing.replaceChildren(...(chosen?.status ? [verificationBadge(doc, chosen.status), approvalBadge(doc, chosen.file, chosen.status)] : []));
+  };
   pick.addEventListener("change", () => {
+    showStanding();
     if (!shown.hidden) shown.value = rulesetText(current());
   });
+  showStanding();
   return el(
     doc,
     "section",
     { "aria-labelledby": "lw-export-title" },
     el(doc, "h2", { id: "lw-export-title" }, "Export"),
-    el(doc, "div", { class: "field" }, el(doc, "label", { for: "lw-export-pick" }, "Ruleset"), pick),
+    el(doc, "div", { class: "field" }, el(doc, "label", { for: "lw-export-pick" }, "Ruleset"), pick, standing),
     el(
       doc,
       "div",

@@ -42,6 +42,10 @@ const API_SETS: Record<string, ApiEntry> = {
   // "Settings: Settings.get, Settings.remove, Settings.saveAsync, Settings.set" (all common sets are version 1.1 unless said).
   "Office.context.document.settings": { set: { name: "Settings", version: "1.1" }, source: `${COMMON_SETS}#settings` },
   "Office.Settings": { set: { name: "Settings", version: "1.1" }, source: `${COMMON_SETS}#settings; ${OFFICE}.settings` },
+  // Office.context.officeTheme (bodyBackgroundColor, isDarkTheme): the OfficeTheme page lists Excel on the web, Windows, Mac
+  // and iOS as supported and names a requirement set for Outlook only (Mailbox 1.14); the Context page gives none for Excel.
+  "Office.context.officeTheme": { set: null, source: `${OFFICE}.officetheme; ${OFFICE}.context#office-office-context-officetheme-member` },
+  "Office.OfficeTheme": { set: null, source: `${OFFICE}.officetheme` },
   // "Requirement set 1.1 is the first version of the API"; associate registers a function (injected by the metadata plugin).
   "CustomFunctions.associate": { set: { name: "CustomFunctionsRuntime", version: "1.1" }, source: CUSTOM_FUNCTION_SETS },
   "CustomFunctions.Invocation": { set: { name: "CustomFunctionsRuntime", version: "1.1" }, source: `${INVOCATION} (address: CustomFunctionsRuntime 1.1)` },

@@ -7,7 +7,7 @@ import { mkdirSync } from "node:fs";
 import path from "node:path";
 import type { Page } from "playwright-core";
 import { builtAddin, ROOT } from "../addin/builtAddin.js";
-import { openBrowser, type Browser, type BrowserOptions } from "../addin/chromium.js";
+import { openBrowser, type Browser } from "../addin/chromium.js";
 import { serveDirectory, type StaticServer } from "../addin/staticServer.js";
 
 /** Excel's task pane is about 320–450 px wide. */
@@ -20,10 +20,26 @@ export interface Pane {
   close(): Promise<void>;
 }
 
-export async function openPane(options: BrowserOptions = {}): Promise<Pane> {
+export interface PaneSetup {
+  width?: number;
+  height?: number;
+  /** Run in the page before its own scripts, on every load. */
+  initScript?: string;
+  /** What the page gets as Office's script (office.js), asked for on every load; an empty script unless given. */
+  officeScript?: () => string;
+  /** More command-line flags for Chromium (a test trusting its own certificate, say). */
+  args?: string[];
+}
+
+export async function openPane(setup: PaneSetup = {}): Promise<Pane> {
   const server: StaticServer = await serveDirectory(await builtAddin());
-  const browser: Browser = await openBrowser(options);
-  await browser.page.setViewportSize({ width: PANE_WIDTH, height: 900 });
+  const browser: Browser = await openBrowser(setup.args ? { args: setup.args } : {});
+  await browser.page.setViewportSize({ width: setup.width ?? PANE_WIDTH, height: setup.height ?? 900 });
+  if (setup.initScript !== undefined) await browser.page.addInitScript(setup.initScript);
+  const officeScript = setup.officeScript;
+  if (officeScript !== undefined) {
+    await browser.page.route("https://appsforoffice.microsoft.com/**", (route) => route.fulfill({ status: 200, contentType: "text/javascript", body: officeScript() }));
+  }
   await browser.page.goto(`${server.origin}/taskpane.html`);
   await browser.page.waitForSelector("#lw-rulesets li[data-ruleset-id]");
   return {
@@ -46,12 +62,21 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   return file;
 }
 
+/** A screenshot of what the pane shows without scrolling, as a user first sees it. */
+export async function screenshotInView(page: Page, name: string): Promise<string> {
+  const dir = path.join(ROOT, "build", "taskpane-screenshots");
+  mkdirSync(dir, { recursive: true });
+  const file = path.join(dir, `${name}.png`);
+  await page.screenshot({ path: file });
+  return file;
+}
+
 /** Whether anything on the page is wider than the pane (a horizontal scroll bar in Excel). */
 export function overflowsWidth(page: Page): Promise<boolean> {
   return page.evaluate(() => document.documentElement.scrollWidth > document.documentElement.clientWidth);
 }
 
-export async function showView(page: Page, view: "library" | "editor" | "compare" | "approve" | "transfer" | "firm-library"): Promise<void> {
+export async function showView(page: Page, view: "library" | "editor" | "compare" | "approve" | "transfer" | "firm-library" | "sheet"): Promise<void> {
   await page.locator(`#lw-tab-${view}`).click();
   await page.waitForSelector(`#lw-view[data-view="${view}"]`);
 }
