@@ -5,7 +5,7 @@
  * catalogue's words (core/text). People's formats print it on standard output;
  * csv and json print it on standard error, so standard output stays parseable.
  */
-import { omissionTexts, planOmissions, shortCautions, statusText, type Plan, type RulesetStatus } from "../../core/index.js";
+import { coverageText, FROM_MEMORY_LEAD, fromMemoryTexts, omissionTexts, planOmissions, shortCautions, statusText, type Plan, type RulesetStatus } from "../../core/index.js";
 import type { ChosenRuleset } from "../input/rulesetOption.js";
 import { jsonNumber, numberText } from "./cells.js";
 import type { Format } from "./format.js";
@@ -42,6 +42,10 @@ export function identityLines(chosen: ChosenRuleset, plan: Plan | null): string[
     `Ruleset: ${file.id} ${file.version} (${chosen.source === "shipped" ? "shipped" : `file ${chosen.source}`}), "${file.title}", ${standard}, fingerprint ${chosen.status.shortFingerprint}`,
     `Status: ${words.summary}`,
   ];
+  if (chosen.status.verification === "unverified") {
+    // What exactly is unverified: the combinations no public source confirms, and each from-memory part.
+    lines.push(`Sources: ${coverageText(chosen.status.combinations)}`, FROM_MEMORY_LEAD, ...fromMemoryTexts(file).map((t) => `- ${t}`));
+  }
   if (plan) {
     const params = parametersInForce(plan);
     if (params.length > 0) {
@@ -74,6 +78,10 @@ export function rulesetJson(chosen: ChosenRuleset) {
     approval: chosen.status.approval,
     summary: chosen.status.summary,
     source: chosen.source,
+    // How many combinations a public source confirms, and what is from memory: what exactly is unverified.
+    confirmed: chosen.status.combinations.confirmed,
+    combinations: chosen.status.combinations.total,
+    fromMemory: file.provenance.filter((p) => p.status === "from-memory").map((p) => ({ source: p.source, covers: p.covers, combinations: p.combinations ?? [] })),
   };
 }
 
