@@ -13,16 +13,11 @@ import { jsonNumber, numberText } from "../output/cells.js";
 import { chooseFormat } from "../output/format.js";
 import { jsonHeader } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
-import { caseFileOptions, delimiterOf, planOrFail, rowLimitOf, writePreamble, type Io, type RulesetOptions, withRowLimitHint } from "./common.js";
+import { caseFileOptions, delimiterOf, planOrFail, rowLimitOf, writePreamble, type CaseOptions, type Io, withRowLimitHint } from "./common.js";
 
-export interface CombosOptions extends RulesetOptions {
+/** The case options read the case file given with --cases, which only names the columns of the list. */
+export interface CombosOptions extends CaseOptions {
   cases?: string;
-  layout: string;
-  idColumns: string;
-  delimiter: string;
-  map?: string;
-  sheet?: string;
-  range?: string;
   rowLimit: string;
 }
 
