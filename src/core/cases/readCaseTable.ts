@@ -28,6 +28,8 @@ export interface CaseTable {
   /** values[component][case] */
   values: Float64Array[];
   map: CaseMap;
+  /** Where each component was named (its header cell, or a result row's first id cell) in the matrix read, for locating a problem with its values. */
+  componentPlaces?: { row: number; column: number }[];
 }
 
 export interface CaseTableOptions {
@@ -112,7 +114,8 @@ function readCasesAsRows(rows: Cell[][], ruleset: Ruleset, map: CaseMap, options
     }
   });
   if (problems.length > 0) return fail(...problems);
-  return ok({ orientation: "rows", cases: headers.value, components, values, map });
+  const componentPlaces = components.map((_, c) => ({ row: 0, column: c + 1 }));
+  return ok({ orientation: "rows", cases: headers.value, components, values, map, componentPlaces });
 }
 
 function readCasesAsColumns(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idColumns: number, options: CaseTableOptions): Result<CaseTable> {
@@ -123,17 +126,19 @@ function readCasesAsColumns(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idCo
   const reader = resultRowReader(cases, { idColumns, numbersAsText: options.numbersAsText ?? false });
   const components: string[] = [];
   const values: Float64Array[] = [];
+  const componentPlaces: { row: number; column: number }[] = [];
   for (let r = 1; r < rows.length; r++) {
     const row = reader.read(rows[r], r);
     if (!row.ok) problems.push(...row.problems);
     else if (row.value) {
       components.push(row.value.id);
       values.push(row.value.values);
+      componentPlaces.push({ row: r, column: 0 });
     }
   }
   if (problems.length > 0) return fail(...problems);
   if (components.length === 0) return fail(problem("cases-empty", "the case table has no result rows"));
-  return ok({ orientation: "columns", cases, components, values, map });
+  return ok({ orientation: "columns", cases, components, values, map, componentPlaces });
 }
 
 function componentNames(cells: Cell[], at: (i: number) => { row: number; column: number }, problems: Problem[]): string[] {
