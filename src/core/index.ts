@@ -4,7 +4,7 @@
  * → plan → envelope / governing / factored / combos / explain.
  */
 export type { Cell } from "./cells.js";
-export { isBlank, cellText, DECIMAL_TEXT, trimTrailingEmpty } from "./cells.js";
+export { isBlank, cellText, DECIMAL_TEXT, trimTrailingEmpty, widthOf } from "./cells.js";
 export {
   columnLetters,
   describePlace,

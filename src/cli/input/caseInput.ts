@@ -304,8 +304,9 @@ function caseStream(
           await source.refill();
         }
       } catch (e) {
-        // The rows before a bad one are given first, as a row-by-row reader gives them; then the error.
-        stopped = e;
+        // The rows before a bad one are given first, as a row-by-row reader gives them; then the error —
+        // unless the file was cut meanwhile, which is what the "bad row" then is.
+        stopped = e instanceof CliError ? ((await source.shrinkError()) ?? e) : e;
       }
       if (batch.count > 0) {
         count += batch.count;
