@@ -245,9 +245,11 @@ const ODD: Odd[] = [
     {
       name: `a file cut short while it is read (${reader} reader)`,
       async run() {
-        // 400,000 rows (about 11 MB): more than one read of 4 MB, so the file is cut after a read and before the next.
-        const file = files.file("csv", export_(400_000));
-        const read = await readWhile(file, reader, () => truncateSync(file, 5_000_000));
+        // Over 4 MB (one read of the bytes reader), cut to nine tenths after the first rows: after a read and before the next.
+        const text = export_(260_000);
+        const file = files.file("csv", text);
+        const read = await readWhile(file, reader, () => truncateSync(file, Math.floor(text.length * 0.9)));
+        if (text.length <= 4 << 20) return { located: true, wrongOutput: `the file is only ${text.length} bytes` };
         if (!("error" in read)) return { located: true, wrongOutput: `read ${read.rows} rows of a file cut short, without a word` };
         return { located: read.error.every((l) => locatedLine(l, file)), wrongOutput: /the file shrank while it was read/.test(read.error[0]) ? null : read.error[0] };
       },
@@ -256,10 +258,10 @@ const ODD: Odd[] = [
       name: `a file removed while it is read (${reader} reader)`,
       async run() {
         // The file stays readable through the handle already open (POSIX unlink): every row is read.
-        const file = files.file("csv", export_(200_000));
+        const file = files.file("csv", export_(30_000));
         const read = await readWhile(file, reader, () => unlinkSync(file));
         if ("error" in read) return { located: read.error.every((l) => locatedLine(l, file)), wrongOutput: null };
-        return { located: true, wrongOutput: read.rows === 200_000 ? null : `read ${read.rows} of 200,000 rows` };
+        return { located: true, wrongOutput: read.rows === 30_000 ? null : `read ${read.rows} of 30,000 rows` };
       },
     },
   ]),

@@ -28,14 +28,19 @@ const WHOLE_FILE = [
   /^the file shrank while it was read/,
   /^a JSON case file is an array of rows/,
   /^the ruleset expands to [\d,]+ concrete rows for this case table, more than the limit/,
+  // A criterion over several results: it names them, and the row.
+  /^criterion ".*" has no finite value in row ".*"/,
 ];
 
 /** Lines that follow a located line and carry no place of their own. */
 const FOLLOWERS = [/^if column [A-Z]+ is part of each result row's name/, /^… and [\d,]+ more problems?$/];
 
+/** Problems with an option's value, placed by the option (and the character in it). */
+const OPTION = /^--(criterion "[^\n]*"(, character \d+)?|row|component|param): /;
+
 /** Whether one error line of a run on `file` says where its problem is. */
 export function locatedLine(line: string, file: string): boolean {
-  if (FOLLOWERS.some((re) => re.test(line))) return true;
+  if (FOLLOWERS.some((re) => re.test(line)) || OPTION.test(line)) return true;
   if (line.startsWith(`${file} line `)) return /^ line \d+/.test(line.slice(file.length));
   if (!line.startsWith(`${file}: `)) return false;
   const sentence = line.slice(file.length + 2);

@@ -15,6 +15,8 @@ import { fileErrorText } from "./fileAccess.js";
 
 /** Bytes read at a time: large reads keep the file system's cost per byte small. */
 const CHUNK = 4 << 20;
+/** The least buffer a file is read into. */
+const SMALL_BUFFER = 64 << 10;
 
 export type SourceStep = "record" | "end" | "wait";
 
@@ -58,13 +60,16 @@ export class CsvSource {
     } catch (e) {
       throw new CliError(`${path}: ${fileErrorText(e)}`);
     }
-    const source = new CsvSource(path, delimiter, file, chunkBytes);
+    let size: number;
     try {
-      source.sizeAtOpen = (await file.stat()).size;
+      size = (await file.stat()).size;
     } catch (e) {
       await file.close();
       throw new CliError(`${path}: ${fileErrorText(e)}`);
     }
+    // A small file needs no buffer of a full chunk (allocating 4 MB costs more than reading a few lines); one that grows is read in larger parts.
+    const source = new CsvSource(path, delimiter, file, Math.min(chunkBytes, Math.max(SMALL_BUFFER, size + 1)));
+    source.sizeAtOpen = size;
     await source.read();
     const b = source.buffer;
     const oneByte = Buffer.byteLength(delimiter, "utf8") === 1 && !/[\d+\-.eE\s]/.test(delimiter);
