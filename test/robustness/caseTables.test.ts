@@ -49,7 +49,7 @@ describe("tables of every shape", () => {
 
   fuzzClassAsync(
     "case tables: shapes in a CSV file, streamed and read whole (envelope, factored)",
-    0.03,
+    0.02,
     anyShape,
     async (t) => {
       const file = files.file("csv", csvText(tableRows(t)));
@@ -87,7 +87,7 @@ async function sameAsPlain([t, style]: [TableSpec, CsvStyle]): Promise<Verdict> 
 describe("how a CSV file is written", () => {
   fuzzClassAsync(
     "case tables: byte order mark, CRLF and CR, quoted delimiters and line breaks, ';' (the same output as the plain file)",
-    0.03,
+    0.02,
     styled,
     sameAsPlain,
     ([t, style]) => shown(csvText(tableRows(t), style)),
@@ -107,7 +107,7 @@ const idAsRead = (id: string, row: number) => (id.trim() === "" ? `row ${row + 1
 describe("unusual Unicode", () => {
   fuzzClassAsync(
     "case tables: unusual Unicode in result ids and case headers (ids come out exactly as written)",
-    0.03,
+    0.02,
     fc.tuple(columnsTable(finiteNumber.filter((n) => Math.abs(n) < 1e300).map(String), { oddHeaders: false, maxRows: 4 }), fc.array(unusual, { minLength: 4, maxLength: 4 }), fc.option(unusual, { nil: undefined })).map(([t, names, header]) => ({
       ...t,
       ids: t.ids.map((id, k) => (k % 2 === 0 ? names[k] : id)),
@@ -157,7 +157,7 @@ describe("binary garbage", () => {
   );
   fuzzClassAsync(
     "case tables: binary garbage as a CSV file and as a JSON file",
-    0.03,
+    0.02,
     garbage,
     async (bytes) => {
       const buffer = Buffer.from(bytes);

@@ -98,7 +98,7 @@ async function jsonFile(t: TableSpec): Promise<Verdict> {
 const describeTable = (t: TableSpec) => shown(csvText(tableRows(t)));
 
 describe("value cells in files", () => {
-  fuzzClassAsync("value cells: CSV fields of every kind, streamed (envelope)", 0.03, columnsTable(csvValue), streamed, describeTable);
+  fuzzClassAsync("value cells: CSV fields of every kind, streamed (envelope)", 0.02, columnsTable(csvValue), streamed, describeTable);
   fuzzClassAsync("value cells: CSV fields of every kind, cases as rows read whole (factored, envelope)", 0.02, columnsTable(csvValue), whole, describeTable);
   fuzzClassAsync("value cells: JSON case files of every kind (envelope)", 0.02, columnsTable(jsonCell), jsonFile, describeTable);
 });
