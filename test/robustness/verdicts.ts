@@ -88,7 +88,8 @@ export function formulaVerdict(outcome: Outcome, sheet: string): { located: bool
     return { located: true, wrongOutput: null };
   }
   if (/internal error/.test(outcome.message)) throw new Error(outcome.message);
-  const placed = new RegExp(`^cases, ${sheet}![A-Z]+\\d+\\b`);
+  // The argument, then its cell (or, in a criterion, its character).
+  const placed = new RegExp(`^(cases|criteria|ruleset|params|options), (${sheet}![A-Z]+\\d+\\b|character \\d+)`);
   const whole = /^(cases: (the case table (is empty|needs a header row|has no result rows)|(neither|both) the first row|no combination of \S+ applies|criterion ")|LW\.\w+ would return about [\d.]+ MB)/;
   const parts = outcome.message.split(" | ").filter((p) => !/^\(and [\d,]+ more problems?\)$/.test(p));
   return { located: parts.every((p) => placed.test(p) || whole.test(p)), wrongOutput: null };
