@@ -62,7 +62,7 @@ const differs = (a: CliOutcome, b: CliOutcome) => a.status !== b.status || a.std
 describe("the same input, the same output", () => {
   fuzzClassAsync(
     "output: every command twice on the same case file, byte for byte (csv, json, table, md)",
-    0.015,
+    0.01,
     readable,
     async (t) => {
       const file = files.file("csv", csvText(tableRows(t)));
