@@ -96,7 +96,8 @@ describe("every command twice, the same bytes (child process)", () => {
 
 describe("values past the largest number, through the real command line", () => {
   // The largest double is about 1.7976931348623157e308 (IEEE 754 binary64; ECMA-262 Number.MAX_VALUE); "1e400" reads
-  // as Infinity in JavaScript. EN 1990 A1 Table A1.2(B): 1.35 on G (unfavourable), 1.5 on a leading variable action.
+  // as Infinity in JavaScript. EN 1990 A1 Table A1.2(B): 1.35 on G (unfavourable), 1.5 on a leading variable action,
+  // as "Steel Buildings in Europe, Multi-Storey Steel Buildings, Part 3: Actions" prints them.
   const PASSES = "the factored sum passes the largest number Loadwright can hold (about ±1.8 × 10^308); check the case values";
 
   test("a streamed export: text beyond it refused at its cell, a sum past it at its line, after the rows before it are written", async () => {

@@ -6,7 +6,12 @@
  * be read, one cut short or removed while it is read). Each gets a defined
  * result or a located problem, never "internal error". The large inputs have
  * their own hang bound (LARGE_MS of processor time, stated in
- * docs/reliability.md); a few values are checked by hand.
+ * docs/reliability.md); a few values are checked by hand, with the recommended
+ * factors of EN 1990 Annex A1 Table A1.2(B) for expression (6.10) — 1.35 or 1.0
+ * on G, 1.5 on the leading variable action — as "Steel Buildings in Europe,
+ * Multi-Storey Steel Buildings, Part 3: Actions" prints them (the source the
+ * shipped en1990-str-6.10 cites as confirmed for these factors; no ψ0 enters
+ * the values checked here).
  */
 import { chmodSync, mkdirSync, rmSync, truncateSync, unlinkSync } from "node:fs";
 import { join } from "node:path";
