@@ -1,23 +1,28 @@
 /// <reference types="office-js" />
 /**
  * The workbook's document settings: stored with the file, per add-in, reachable
- * from the formulas because formulas and task pane share one runtime. A value is
- * only kept once `saveAsync` succeeds; on failure the previous value is put back
- * so the runtime never shows what the file does not hold.
+ * from the formulas because formulas and task pane share one runtime. A write
+ * sets the value, then asks Office to save the settings; it counts only once
+ * `saveAsync` succeeds. Any step may fail — `set` or `saveAsync` throwing, or
+ * `saveAsync` reporting a failure — and then the previous value is put back
+ * (`set` again, or `remove` where there was none), so the runtime does not show
+ * what the file does not hold. Where putting it back fails as well, the session
+ * keeps the new value whole, unsaved, and the error says so: the key is read
+ * back to tell which value it holds (settingsBackend.ts, writeFailure).
  */
-import type { SettingsBackend } from "../workbook/settingsBackend.js";
+import { writeFailure, type SettingsBackend } from "../workbook/settingsBackend.js";
 
 export function officeSettingsBackend(): SettingsBackend {
   const settings = (): Office.Settings | null =>
     typeof Office !== "undefined" && Office.context?.document?.settings ? Office.context.document.settings : null;
+  const textOf = (value: unknown): string | null => (typeof value === "string" ? value : null);
   return {
     where: "this workbook (document settings)",
     available: () => settings() !== null,
     read: (key) => {
       const s = settings();
       if (!s) return null;
-      const value: unknown = s.get(key);
-      return typeof value === "string" ? value : null;
+      return textOf(s.get(key));
     },
     write: (key, value) =>
       new Promise<void>((resolve, reject) => {
@@ -26,17 +31,30 @@ export function officeSettingsBackend(): SettingsBackend {
           reject(new Error("the workbook's settings are not available (Office has not started)"));
           return;
         }
-        const before: unknown = s.get(key);
-        s.set(key, value);
-        s.saveAsync((result) => {
-          if (result.status === Office.AsyncResultStatus.Succeeded) {
-            resolve();
-            return;
+        const before = textOf(s.get(key));
+        const failed = (reason: unknown) => {
+          try {
+            if (before !== null) s.set(key, before);
+            else s.remove(key);
+          } catch {
+            // Putting the value back failed too: the error below says the session holds the new value.
           }
-          if (typeof before === "string") s.set(key, before);
-          else s.remove(key);
-          reject(new Error(`the workbook did not save its settings: ${result.error?.message ?? "unknown reason"}`));
-        });
+          reject(writeFailure(reason, () => textOf(s.get(key)), before, value));
+        };
+        try {
+          s.set(key, value);
+        } catch (e) {
+          failed(new Error(`the workbook did not take the new settings: ${e instanceof Error ? e.message : String(e)}`));
+          return;
+        }
+        try {
+          s.saveAsync((result) => {
+            if (result.status === Office.AsyncResultStatus.Succeeded) resolve();
+            else failed(new Error(`the workbook did not save its settings: ${result.error?.message ?? "unknown reason"}`));
+          });
+        } catch (e) {
+          failed(new Error(`the workbook did not save its settings: ${e instanceof Error ? e.message : String(e)}`));
+        }
       }),
   };
 }

@@ -21,6 +21,13 @@ export const DECIMAL_TEXT = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 
 const blankOrZero = (c: Cell) => isBlank(c) || c === 0;
 
+/** The longest row's length (a loop: spreading a range of 100,000 rows into Math.max would overflow the stack). */
+export function widthOf(rows: readonly (readonly unknown[])[]): number {
+  let width = 0;
+  for (const r of rows) if (r.length > width) width = r.length;
+  return width;
+}
+
 /**
  * A case table as a range gives it: trailing rows and columns that hold only
  * blanks and zeros are outside it (no header can be 0, and an older Excel
@@ -30,7 +37,7 @@ export function trimTrailingEmpty(m: Cell[][]): Cell[][] {
   let rows = m.length;
   while (rows > 0 && m[rows - 1].every(blankOrZero)) rows--;
   const kept = m.slice(0, rows);
-  let width = Math.max(0, ...kept.map((r) => r.length));
+  let width = widthOf(kept);
   while (width > 0 && kept.every((r) => r.length < width || blankOrZero(r[width - 1]))) width--;
   return kept.map((r) => (r.length > width ? r.slice(0, width) : r));
 }

@@ -4,7 +4,7 @@
  * → plan → envelope / governing / factored / combos / explain.
  */
 export type { Cell } from "./cells.js";
-export { isBlank, cellText, DECIMAL_TEXT, trimTrailingEmpty } from "./cells.js";
+export { isBlank, cellText, DECIMAL_TEXT, trimTrailingEmpty, widthOf } from "./cells.js";
 export {
   columnLetters,
   describePlace,
@@ -66,6 +66,7 @@ export type { Plan, PlanCase, PlannedCombination, RowRef } from "./plan/types.js
 
 // Evaluation
 export { envelope, envelopeOf, type EnvelopeEntry, type EnvelopeValue } from "./evaluate/envelope.js";
+export { notFiniteProblem, type ComponentPlace } from "./evaluate/notFinite.js";
 export { extremes, extremesEvaluator, type Extreme, type Extremes, type ExtremesEvaluator, type RowExtremes } from "./evaluate/extremes.js";
 export { compiledPlanOf, type CompiledPlan } from "./plan/compiledPlan.js";
 export { governing, defaultCriteria, type GoverningRow, type GoverningOptions } from "./evaluate/governing.js";

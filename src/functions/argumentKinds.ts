@@ -67,6 +67,8 @@ export const PROBLEM_ARGUMENT: Partial<Record<ProblemKind, ArgumentKind>> = {
   "unknown-row": "row",
   "unknown-component": "component",
   "criterion-syntax": "criteria",
+  // A sum past the largest number comes from the case values: the message names the result and the row, the place its cell.
+  "result-not-finite": "cases",
 };
 
 export type ReadArguments =

@@ -31,6 +31,9 @@ export function asScalar(raw: unknown): { value: Cell } | { cells: number } {
 function asCell(value: unknown): Cell {
   if (value === null || value === undefined) return null;
   if (typeof value === "string" || typeof value === "number" || typeof value === "boolean") return value;
+  // An error value in a cell (CustomFunctions.Error: a code such as "#N/A") reads as its code, which the core names as an error value.
+  const code = (value as { code?: unknown }).code;
+  if (typeof code === "string" && code.startsWith("#")) return code;
   // Anything else Excel may hand over (an entity, a rich value) is shown as its JSON text, which no reader takes for a number.
   try {
     return JSON.stringify(value) ?? typeof value;

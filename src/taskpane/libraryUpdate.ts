@@ -9,7 +9,7 @@
  */
 import { rulesetStatus, shippedRulesets, shortFingerprint, type FirmLibraryEntry } from "../core/index.js";
 import type { LibraryEntry } from "../workbook/rulesetLibrary.js";
-import { withAfterWrite } from "./afterWrite.js";
+import { unchangedAfterFailure, withAfterWrite } from "./afterWrite.js";
 import { comparison, type Compared } from "./compareView.js";
 import { button, el } from "./dom.js";
 import { firmLibraryState } from "./firmLibraryState.js";
@@ -87,7 +87,7 @@ export function updateSection(ctx: PaneContext, entry: FirmLibraryEntry): HTMLEl
     const saved = await ctx.store().save(entry.ruleset.file);
     if (!saved.ok) {
       store.disabled = false;
-      ctx.notice(`Not stored: ${saved.problems.map((p) => p.message).join("; ")}. Nothing stored changed.`, "problem");
+      ctx.notice(`Not stored: ${saved.problems.map((p) => p.message).join("; ")}.${unchangedAfterFailure(saved, " Nothing stored changed.")}`, "problem");
       return;
     }
     firmLibraryState(ctx).updating = null;

@@ -17,7 +17,7 @@ import type { PaneContext } from "./paneContext.js";
 import { reviewerCopy, writeReviewerCopy } from "./reviewerCopy.js";
 import { connectedSheet } from "./sheetConnection.js";
 import { defaultChoice, sheetChoices, type SheetChoice } from "./sheetChoices.js";
-import { tableName, tableOnSheet, type TableOnSheet } from "./sheetTable.js";
+import { placedText, tableName, tableOnSheet, type TableOnSheet } from "./sheetTable.js";
 import { criteriaTexts, prepareInsert, writeInsert, type PreparedInsert } from "./starterInsert.js";
 
 /** What the user typed, kept while the pane is open so that coming back to the view finds it so. */
@@ -256,7 +256,8 @@ function previewOf(ctx: PaneContext, t: TableOnSheet): HTMLElement[] {
     el(doc, "p", { id: "lw-sheet-read" }, `${tableName(t.read)}: cases as ${t.table.orientation} (${cases}); ${counted(t.table.components.length, t.table.orientation === "rows" ? "component" : "result")}; ${counted(t.plan.rowCount, "combination row")}.`),
   ];
   if (!entries.ok) {
-    out.push(...entries.problems.map((p) => el(doc, "p", { class: "problem" }, `${tableName(t.read)}: ${p.message}`)));
+    // A sum past the largest number names its result's cell on the sheet, as a value that is not a number does.
+    out.push(...entries.problems.map((p) => el(doc, "p", { class: "problem" }, `${tableName(t.read)}: ${placedText(p, t.read.area)}`)));
     return out;
   }
   out.push(envelopeTable(doc, t.table.orientation === "rows" ? "component" : "result", entries.value));

@@ -3,7 +3,7 @@
  * problems, and only after confirming anything it would replace or shadow.
  */
 import { button, el, uniqueId } from "./dom.js";
-import { withAfterWrite } from "./afterWrite.js";
+import { unchangedAfterFailure, withAfterWrite } from "./afterWrite.js";
 import type { DraftCheck } from "./draftCheck.js";
 import type { Draft } from "./draftStore.js";
 import type { PaneContext } from "./paneContext.js";
@@ -47,7 +47,7 @@ export function renderStoreBar(ctx: PaneContext, draft: Draft, check: DraftCheck
           const text = result.problems.map((p) => p.message).join("; ");
           reason.textContent = `Not stored: ${text}. The draft is kept.`;
           reason.className = "problem";
-          ctx.notice(`Not stored: ${text}. The draft is kept; nothing stored changed.`, "problem");
+          ctx.notice(`Not stored: ${text}. The draft is kept${unchangedAfterFailure(result)}.`, "problem");
           return;
         }
         ctx.drafts.remove(draft.key);

@@ -7,7 +7,7 @@
  * .json download, or as text to copy where the host blocks downloads.
  */
 import { compareRulesets, shippedRulesets, type RulesetFile, type RulesetStatus } from "../core/index.js";
-import { withAfterWrite } from "./afterWrite.js";
+import { unchangedAfterFailure, withAfterWrite } from "./afterWrite.js";
 import { button, el } from "./dom.js";
 import { checkDraft } from "./draftCheck.js";
 import { draftId } from "./draftLabel.js";
@@ -108,7 +108,7 @@ function importResult(ctx: PaneContext, text: string, source: string): HTMLEleme
       .then((saved) => {
         if (!saved.ok) {
           storeButton.disabled = false;
-          ctx.notice(`Not stored: ${saved.problems.map((p) => p.message).join("; ")}; nothing stored changed.`, "problem");
+          ctx.notice(`Not stored: ${saved.problems.map((p) => p.message).join("; ")}${unchangedAfterFailure(saved)}.`, "problem");
           return;
         }
         ctx.selected = f.id;

@@ -9,7 +9,7 @@
  */
 import { z } from "zod";
 import { problem, type Result } from "../core/index.js";
-import type { SettingsBackend } from "./settingsBackend.js";
+import { SettingsWriteError, type SettingsBackend } from "./settingsBackend.js";
 
 export const FIRM_LIBRARY_LINK_KEY = "loadwright.firmLibrary";
 export const FIRM_LIBRARY_LINK_FORMAT = "loadwright-library-link/1";
@@ -72,7 +72,9 @@ export class FirmLibraryLinkStore {
       return { ok: true, value: link };
     } catch (e) {
       const reason = e instanceof Error ? e.message : String(e);
-      return { ok: false, problems: [problem("library-link", `the firm library's address and reading time were not kept in ${this.backend.where}: ${reason}`)] };
+      // One value under one key: what is kept is the whole earlier value, or the whole new one unsaved (settingsBackend.ts).
+      const held = e instanceof SettingsWriteError && e.holds === "new-unsaved" ? "; this session keeps the new address and reading, unsaved" : "; what was kept before is unchanged";
+      return { ok: false, problems: [problem("library-link", `the firm library's address and reading time were not kept in ${this.backend.where}: ${reason}${held}`)] };
     }
   }
 

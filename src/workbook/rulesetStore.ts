@@ -8,7 +8,7 @@
  * ruleset use what is now stored) and hands on the sentence it returns.
  */
 import { loadRuleset, problem, STORE_FORMAT, STORE_KEY, type Problem, type Result, type Ruleset } from "../core/index.js";
-import type { SettingsBackend } from "./settingsBackend.js";
+import { SettingsWriteError, type HeldAfterFailure, type SettingsBackend } from "./settingsBackend.js";
 
 export { STORE_FORMAT, STORE_KEY };
 
@@ -33,8 +33,13 @@ const storeProblem = (message: string): Problem => problem("ruleset-store", mess
  */
 export type AfterWrite = (ids: readonly string[]) => Promise<string>;
 
-/** A write's result, with what the hook said after it (absent when the write failed or there is no hook). */
-export type WriteResult<T> = Result<T> & { afterWrite?: string };
+/**
+ * A write's result, with what the hook said after it (absent when the write
+ * failed or there is no hook); after a failed write, which whole value is
+ * stored now (`held`): what was stored before, or — where the backend could
+ * not put it back — the new one, held by this session but not saved.
+ */
+export type WriteResult<T> = Result<T> & { afterWrite?: string; held?: HeldAfterFailure };
 
 export interface RulesetStoreOptions {
   afterWrite?: AfterWrite;
@@ -105,14 +110,25 @@ export class RulesetStore {
     }
   }
 
-  private async write(rulesets: unknown[]): Promise<Result<true>> {
+  /**
+   * Every stored ruleset is one value under one key, written in one step: a
+   * failure leaves the whole value from before or, where the backend could not
+   * put it back, the whole new one unsaved — never a mix, never nothing — and
+   * the problem says which.
+   */
+  private async write(rulesets: unknown[]): Promise<WriteResult<true>> {
     const value: StoreValue = { format: STORE_FORMAT, rulesets };
     try {
       await this.backend.write(STORE_KEY, JSON.stringify(value));
       return { ok: true, value: true };
     } catch (e) {
       const reason = e instanceof Error ? e.message : String(e);
-      return { ok: false, problems: [storeProblem(`the ruleset was not saved to ${this.backend.where}: ${reason}; what was stored before is unchanged`)] };
+      const held: HeldAfterFailure = e instanceof SettingsWriteError ? e.holds : "before";
+      const what =
+        held === "before"
+          ? "what was stored before is unchanged"
+          : `and what was stored before could not be put back: this session now uses the new content, which ${this.backend.where} does not hold; store it again, or reopen the workbook to return to what was stored before`;
+      return { ok: false, problems: [storeProblem(`the ruleset was not saved to ${this.backend.where}: ${reason}; ${what}`)], held };
     }
   }
 }

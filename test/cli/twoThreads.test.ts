@@ -51,10 +51,21 @@ describe("envelope on two threads", () => {
     expect(two).toEqual(one);
   });
 
-  test("stops where one thread stops, having written the same rows: a result that is not finite", async () => {
+  test("stops where one thread stops, having written the same rows: a value beyond the largest number", async () => {
+    // "1e400" reads as Infinity in JavaScript (ECMA-262, StringToNumber rounds it past the largest double): refused where it is read.
     const { one, two } = await bothWays(exportFile("huge.csv", (r, l) => (r === 7_000 ? l.replace(/,[^,]*$/, ",1e400") : l)));
     expect(one.status).toBe(1);
-    expect(one.stderr).toMatch(/line 7002 \(M1166 My\): the result is (-)?Infinity, not a finite number/);
+    expect(one.stderr).toMatch(/huge\.csv line 7002, column E \(W:E\): "1e400" is beyond the largest number Loadwright can hold/);
+    expect(two).toEqual(one);
+  });
+
+  test("stops where one thread stops, having written the same rows: a factored sum past the largest number", async () => {
+    // W:E = 1.7e308: 1.5 × 1.7e308 (W leading, EN 1990 A1 Table A1.2(B)) is past the largest double, about
+    // 1.797e308 (IEEE 754 binary64; ECMA-262 Number.MAX_VALUE); 0.9 × 1.7e308 (W accompanying, 1.5·ψ0) is not.
+    const { one, two } = await bothWays(exportFile("overflow.csv", (r, l) => (r === 7_000 ? l.replace(/,[^,]*$/, ",1.7e308") : l)));
+    expect(one.status).toBe(1);
+    expect(one.stderr).toMatch(/overflow\.csv line 7002: "M1166 My" has no finite value in row "[^"]*1\.5W:E[^"]*": the factored sum passes the largest number/);
+    expect(one.stdout.trim().split("\n")).toHaveLength(7_001);
     expect(two).toEqual(one);
   });
 

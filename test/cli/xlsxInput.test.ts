@@ -174,6 +174,10 @@ describe("cells a CSV file holds as text are answered as there", () => {
       // A CSV field is text, so "420" there is a number; in a worksheet a number stored as text is refused, with a hint.
       if (/^\d+$/.test(csvText)) {
         expect(fromXlsx).toEqual([`${name}.xlsx Results!C2 (L): "${csvText}" is not a number (a number stored as text? convert it)`]);
+      } else if (csvText.startsWith("#")) {
+        // A spreadsheet's error value is named as such, in a worksheet and as the text a CSV export writes of it.
+        expect(fromXlsx).toEqual([`${name}.xlsx Results!C2 (L): ${csvText} is an error value, not a number (the cell's own formula failed)`]);
+        expect(await refused(["envelope", `${name}.csv`, ...RULES, "--format", "csv"])).toEqual([`${name}.csv line 2, column C (L): ${csvText} is an error value, not a number (the cell's own formula failed)`]);
       } else {
         expect(fromXlsx).toEqual([`${name}.xlsx Results!C2 (L): "${csvText}" is not a number`]);
         expect(await refused(["envelope", `${name}.csv`, ...RULES, "--format", "csv"])).toEqual([`${name}.csv line 2, column C (L): "${csvText}" is not a number`]);

@@ -28,15 +28,15 @@ export default class RobustnessReporter implements Reporter {
       .map((f) => JSON.parse(readFileSync(join(ROBUSTNESS_DIR, f), "utf8")) as RobustnessCounts)
       .sort((a, b) => a.name.localeCompare(b.name));
     if (classes.length === 0) return;
-    const sum = (k: keyof Omit<RobustnessCounts, "name">) => classes.reduce((s, c) => s + c[k], 0);
+    const sum = (k: keyof Omit<RobustnessCounts, "name">) => classes.reduce((s, c) => s + (c[k] ?? 0), 0);
     const width = Math.max(...classes.map((c) => c.name.length));
     const lines = [
       "",
-      `Robustness: ${n(sum("inputs"))} bad or hostile inputs, crashes ${n(sum("crashes"))}, hangs ${n(sum("hangs"))}, unlocated problems ${n(sum("unlocated"))}, prototype changes ${n(sum("prototypeChanges"))}`,
+      `Robustness: ${n(sum("inputs"))} bad or hostile inputs in ${classes.length} classes, crashes ${n(sum("crashes"))}, hangs ${n(sum("hangs"))}, unlocated problems ${n(sum("unlocated"))}, prototype changes ${n(sum("prototypeChanges"))}, wrong outputs ${n(sum("wrongOutputs"))}`,
       ...classes.map(
         (c) =>
           `  ${c.name.padEnd(width)}  ${n(c.inputs).padStart(9)} inputs  crashes ${c.crashes}  hangs ${c.hangs}` +
-          (c.unlocated + c.prototypeChanges > 0 ? `  unlocated ${c.unlocated}  prototype changes ${c.prototypeChanges}` : ""),
+          (c.unlocated + c.prototypeChanges + (c.wrongOutputs ?? 0) > 0 ? `  unlocated ${c.unlocated}  prototype changes ${c.prototypeChanges}  wrong outputs ${c.wrongOutputs ?? 0}` : ""),
       ),
       "",
     ];

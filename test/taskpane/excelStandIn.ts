@@ -52,7 +52,20 @@ export interface StandInRecord {
 
 declare global {
   interface Window {
-    __standIn: { record: StandInRecord; sheets: Record<string, Record<string, StandInCell>>; names: Record<string, string>; settings: Record<string, string>; select(address: string): void };
+    __standIn: {
+      record: StandInRecord;
+      sheets: Record<string, Record<string, StandInCell>>;
+      names: Record<string, string>;
+      settings: Record<string, string>;
+      /** The document's copy of the settings: what the last successful saveAsync persisted. */
+      savedSettings: Record<string, string>;
+      /**
+       * Steps of the next settings writes to fail, in the order they are met: "set throws", "remove throws",
+       * "saveAsync throws" (at once), "saveAsync fails later" (in its callback, with a failed status).
+       */
+      failing: string[];
+      select(address: string): void;
+    };
   }
 }
 
@@ -63,6 +76,9 @@ export function installExcelStandIn(seed: StandInSeed): void {
   const sheets: Record<string, Record<string, Cell>> = {};
   const names: Record<string, string> = { ...(seed.names ?? {}) };
   const settings: Record<string, string> = { ...(seed.settings ?? {}) };
+  const savedSettings: Record<string, string> = { ...settings };
+  const failing: string[] = [];
+  const failsNow = (step: string) => failing[0] === step && failing.shift() === step;
   let active = seed.active;
   let selection = seed.selection;
 
@@ -380,14 +396,27 @@ export function installExcelStandIn(seed: StandInSeed): void {
         settings: {
           get: (key: string) => settings[key] ?? null,
           set: (key: string, value: string) => {
+            record.calls.push("settings.set");
+            if (failsNow("set throws")) throw new Error("the settings cannot be changed now");
             settings[key] = value;
           },
           remove: (key: string) => {
+            record.calls.push("settings.remove");
+            if (failsNow("remove throws")) throw new Error("the setting cannot be removed now");
             delete settings[key];
           },
-          saveAsync: (callback: (r: { status: string }) => void) => {
+          saveAsync: (callback: (r: { status: string; error?: { message: string } }) => void) => {
             record.calls.push("settings.saveAsync");
-            setTimeout(() => callback({ status: "succeeded" }), 0);
+            if (failsNow("saveAsync throws")) throw new Error("the document is busy");
+            if (failsNow("saveAsync fails later")) {
+              setTimeout(() => callback({ status: "failed", error: { message: "the document is read-only" } }), 0);
+              return;
+            }
+            setTimeout(() => {
+              for (const k of Object.keys(savedSettings)) delete savedSettings[k];
+              Object.assign(savedSettings, settings);
+              callback({ status: "succeeded" });
+            }, 0);
           },
         },
       },
@@ -407,6 +436,8 @@ export function installExcelStandIn(seed: StandInSeed): void {
     sheets,
     names,
     settings,
+    savedSettings,
+    failing,
     select: (address: string) => {
       selection = address;
     },

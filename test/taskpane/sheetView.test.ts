@@ -106,6 +106,12 @@ beforeAll(async () => {
           B21: "'abc",
           A22: "L",
           B22: 5,
+          // A dead load near the largest double (invented): 1.4 × 1.5e308 = 2.1e308 has no finite value.
+          B30: "P",
+          A31: "D",
+          B31: 1.5e308,
+          A32: "L",
+          B32: 0,
         },
         Calc: {},
         Review: { C5: "keep me" },
@@ -191,6 +197,18 @@ describe("the envelope preview", () => {
     expect((await problems("Loads!A10:C12")).some((l) => /: Loads!A12\b.*"Q"/.test(l))).toBe(true);
     // Loads!B21 holds the text "abc" where a number belongs, under the header P of the case D.
     expect((await problems("Loads!A20:B22")).some((l) => /: Loads!B21\b.*"abc".*not a number/.test(l))).toBe(true);
+  });
+
+  test("names the result and the row whose factored sum passes the largest number, and shows no number", async () => {
+    await page().locator("#lw-sheet-cases").fill("Loads!A30:B32");
+    await page().locator("#lw-sheet-preview").click();
+    await settled("lw-sheet-preview-result");
+    // The largest double is about 1.7976931348623157 × 10^308 (IEEE 754 binary64; ECMA-262 Number.MAX_VALUE):
+    // ASCE/SEI 7-16 §2.3.1 (1), 1.4D, is the first row to pass it.
+    expect(await page().locator("#lw-sheet-preview-result p.problem").allTextContents()).toEqual([
+      'Loads!A30:B32: Loads!B30: "P" has no finite value in row "1: 1.4D": the factored sum passes the largest number Loadwright can hold (about ±1.8 × 10^308); check the case values',
+    ]);
+    expect(await page().locator("#lw-sheet-envelope").count()).toBe(0);
   });
 
   test("previews a draft being edited, before it is stored", async () => {

@@ -54,7 +54,7 @@ describe("FirmLibraryLinkStore", () => {
     const links = new FirmLibraryLinkStore(refusing);
     const written = await links.recordReading(FROM_FILE);
     expect(written.ok).toBe(false);
-    if (!written.ok) expect(written.problems[0].message).toBe("the firm library's address and reading time were not kept in a workbook that cannot save: saving is not possible");
+    if (!written.ok) expect(written.problems[0].message).toBe("the firm library's address and reading time were not kept in a workbook that cannot save: saving is not possible; what was kept before is unchanged");
     expect(links.read()).toEqual({ ok: true, value: { address: ADDRESS, lastRead: FROM_ADDRESS } });
   });
 });

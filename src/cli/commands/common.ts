@@ -3,7 +3,7 @@
  * map and case file options, the plan, and writing the preamble where the
  * format wants it.
  */
-import { describeProblem, planForTable, type CaseMap, type CaseTable, type Plan, type Problem } from "../../core/index.js";
+import { describeProblem, notFiniteProblem, planForTable, type CaseMap, type CaseTable, type Plan, type Problem } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
 import { caseMapFrom } from "../input/caseMapOption.js";
 import { openCases, tableShape, type CaseFileOptions, type CaseInput, type Layout } from "../input/caseInput.js";
@@ -113,8 +113,16 @@ export function delimiterOf(option: string): string {
   return d;
 }
 
-/** A value about to be written must be a finite number: never NaN or Infinity in an output. */
-export function finiteOrFail(value: number, file: string, where: string): number {
+/**
+ * A value about to be written must be a finite number: never NaN or Infinity in
+ * an output. Otherwise the core's words, naming the result and the concrete row,
+ * at `place` ("line 12", or "line 3, column A").
+ */
+export function finiteOrFail(value: number, file: string, place: string, result: string, rowLabel: string): number {
   if (Number.isFinite(value)) return value;
-  throw new CliError(`${file} ${where}: the result is ${value}, not a finite number (are the case values far too large?)`);
+  throw notFiniteError(file, place, result, rowLabel);
+}
+
+export function notFiniteError(file: string, place: string, result: string, rowLabel: string): CliError {
+  return new CliError(`${file} ${place}: ${notFiniteProblem(JSON.stringify(result), rowLabel).message}`);
 }

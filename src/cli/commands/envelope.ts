@@ -6,7 +6,7 @@ import { parameterInput } from "../input/paramOption.js";
 import { csvField, jsonNumber, numberText } from "../output/cells.js";
 import { streamedJsonStart } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
-import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
+import { notFiniteError, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
 import { envelopeOnTwoThreads } from "./envelopeThreads.js";
 import { resultBatches } from "./results.js";
 
@@ -39,8 +39,8 @@ export async function envelopeCommand(file: string, options: EnvelopeOptions, io
         const e = evaluator.evaluateAt(batch.values, n * cases);
         if (!e) throw noRowsError(plan, file);
         const { maxValue: max, minValue: min } = e;
-        // Where the row is is worded only when it is needed.
-        if (!Number.isFinite(max) || !Number.isFinite(min)) finiteOrFail(Number.isFinite(max) ? min : max, file, batch.where(n));
+        // A row without a finite value (a sum past the largest number) is refused, naming the result and the row.
+        if (!e.finite) throw notFiniteError(file, batch.place(n), batch.ids[n], labelOf(compiled, e.faultBranch, e.faultChoices));
         await write(batch.ids[n], max, labelOf(compiled, e.maxBranch, e.maxChoices), min, labelOf(compiled, e.minBranch, e.minChoices));
       }
       await out.maybeFlush();

@@ -8,7 +8,7 @@
 import { Worker } from "node:worker_threads";
 import type { ParameterInput, Ruleset } from "../../core/index.js";
 import type { CaseStream } from "../input/caseInput.js";
-import { finiteOrFail, type Io } from "./common.js";
+import { notFiniteError, type Io } from "./common.js";
 import type { EnvelopeBlock, EnvelopeLines, EnvelopeWorkerSetup } from "./envelopeWorker.js";
 import { resultBatches } from "./results.js";
 
@@ -53,7 +53,7 @@ export async function envelopeOnTwoThreads(file: string, input: CaseStream, rule
     if (lines.stoppedAt >= 0) {
       // A result that is not finite: nothing after it is written.
       written = false;
-      finiteOrFail(lines.value, file, `line ${oldest.fileLines[lines.stoppedAt]} (${oldest.ids[lines.stoppedAt]})`);
+      throw notFiniteError(file, `line ${oldest.fileLines[lines.stoppedAt]}`, oldest.ids[lines.stoppedAt], lines.rowLabel);
     }
     await out.maybeFlush();
   };

@@ -25,12 +25,12 @@ export interface EnvelopeBlock {
   values: Float64Array;
 }
 
-/** The block's CSV lines; `stoppedAt` ≥ 0: the row whose envelope is not finite (lines stop before it). */
+/** The block's CSV lines; `stoppedAt` ≥ 0: the result row with a concrete row (`rowLabel`) that has no finite value (lines stop before it). */
 export interface EnvelopeLines {
   seq: number;
   text: string;
   stoppedAt: number;
-  value: number;
+  rowLabel: string;
 }
 
 function start(setup: EnvelopeWorkerSetup): (block: EnvelopeBlock) => EnvelopeLines {
@@ -54,10 +54,10 @@ function start(setup: EnvelopeWorkerSetup): (block: EnvelopeBlock) => EnvelopeLi
       const e = evaluator.evaluateAt(block.values, n * cases);
       if (!e) throw new Error("the plan has no rows");
       const { maxValue: max, minValue: min } = e;
-      if (!Number.isFinite(max) || !Number.isFinite(min)) return { seq: block.seq, text, stoppedAt: n, value: Number.isFinite(max) ? min : max };
+      if (!e.finite) return { seq: block.seq, text, stoppedAt: n, rowLabel: labelOf(compiled, e.faultBranch, e.faultChoices) };
       text += `${csvField(block.ids[n])},${numberText(max)},${field(labelOf(compiled, e.maxBranch, e.maxChoices))},${numberText(min)},${field(labelOf(compiled, e.minBranch, e.minChoices))}\n`;
     }
-    return { seq: block.seq, text, stoppedAt: -1, value: 0 };
+    return { seq: block.seq, text, stoppedAt: -1, rowLabel: "" };
   };
 }
 

@@ -9,7 +9,9 @@ import { cliErrorOf, CliError } from "../cliError.js";
 import { jsonNumber, numberText } from "../output/cells.js";
 import { jsonHeader } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
-import { finiteOrFail, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
+import { problemsInFile } from "../input/caseInput.js";
+import { csvLocator, type CellLocator } from "../input/locate.js";
+import { noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
 
 export interface ExplainOptions extends CaseOptions {
   row: string;
@@ -22,26 +24,32 @@ export async function explainCommand(file: string, options: ExplainOptions, io: 
   if (plan.rowCount === 0) throw noRowsError(plan, file);
   const wanted = options.component.trim();
   let table: CaseTable;
+  let at: CellLocator;
   if (input.kind === "table") {
     table = input.table;
+    at = input.at;
   } else {
-    let values: Float64Array | null = null;
+    let found: { values: Float64Array; line: number } | null = null;
     const guess = new NearestName(wanted);
     for await (const row of input.rows) {
       if (row.id === wanted) {
-        values = row.values;
+        found = row;
         break; // leaving the loop closes the file
       }
       guess.consider(row.id);
     }
-    if (!values) throw new CliError(`--component: no result row of ${file} is named "${wanted}"${didYouMean(guess.best)}`);
-    table = { orientation: "columns", cases: input.cases, components: [wanted], values: [values], map: input.map };
+    if (!found) throw new CliError(`--component: no result row of ${file} is named "${wanted}"${didYouMean(guess.best)}`);
+    table = { orientation: "columns", cases: input.cases, components: [wanted], values: [found.values], map: input.map, componentPlaces: [{ row: found.line - 1, column: 0 }] };
+    at = csvLocator((r) => r + 1);
   }
   const row = /^\d+$/.test(options.row.trim()) ? Number(options.row.trim()) : options.row;
   const result = explain(plan, table, row, wanted);
-  if (!result.ok) throw cliErrorOf(result.problems.map((p) => `${p.kind === "unknown-component" ? "--component" : "--row"}: ${describeProblem(p)}`));
+  if (!result.ok) {
+    // A total past the largest number is the file's; the others are about the options given.
+    if (result.problems.some((p) => p.kind === "result-not-finite")) throw problemsInFile(file, result.problems, at);
+    throw cliErrorOf(result.problems.map((p) => `${p.kind === "unknown-component" ? "--component" : "--row"}: ${describeProblem(p)}`));
+  }
   const x = result.value;
-  finiteOrFail(x.total, file, `(${x.component})`);
   await writePreamble(io, prepared);
 
   if (format === "json") {

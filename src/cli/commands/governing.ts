@@ -11,13 +11,14 @@
  */
 import { criterionNames, governing, parseCriterion, rowValue, defaultCriteria, didYouMean, NearestName, type CaseTable, type Criterion, type GoverningRow } from "../../core/index.js";
 import { cliErrorOf, CliError } from "../cliError.js";
-import { openCases, type CaseStream } from "../input/caseInput.js";
+import { openCases, problemsInFile, type CaseStream } from "../input/caseInput.js";
 import { jsonNumber, numberText } from "../output/cells.js";
 import { jsonHeader, streamedJsonStart } from "../output/preamble.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { caseFileOptions, delimiterOf, finiteOrFail, idColumnsOf, noRowsError, prepare, rowLimitOf, writePreamble, type CaseOptions, type Io, type Prepared, withRowLimitHint } from "./common.js";
 import { resultsOf } from "./results.js";
 import { caseMapFrom } from "../input/caseMapOption.js";
+import { csvLocator } from "../input/locate.js";
 
 export interface GoverningCommandOptions extends CaseOptions {
   criterion: string[];
@@ -50,8 +51,10 @@ async function governingOfTable(file: string, prepared: Prepared, table: CaseTab
   const texts = options.criterion;
   const criteria = texts.length > 0 ? criteriaOrFail(texts, table.components) : defaultCriteria(table);
   const result = governing(plan, table, criteria, { rowLimit: rowLimitOf(options.rowLimit) });
-  if (!result.ok) throw cliErrorOf(result.problems.map((p) => `${file}: ${withRowLimitHint(p)}`));
-  for (const g of result.value) g.values.forEach((v, c) => finiteOrFail(v, file, `(${table.components[c]}, row ${g.label})`));
+  if (!result.ok) {
+    if (prepared.input.kind === "table" && result.problems.some((p) => p.kind === "result-not-finite")) throw problemsInFile(file, result.problems, prepared.input.at);
+    throw cliErrorOf(result.problems.map((p) => `${file}: ${withRowLimitHint(p)}`));
+  }
   await writePreamble(io, prepared);
   if (format === "json") {
     const body = {
@@ -92,10 +95,14 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
   // note the closest id to each name that is missing.
   const wanted = new Set(options.criterion.flatMap(criterionNames));
   const found = new Map<string, Float64Array>();
+  const lineOf = new Map<string, number>();
   const closest = new Map([...wanted].map((name) => [name, new NearestName(name)]));
   for await (const r of resultsOf(first, "governing (choosing rows)")) {
     if (wanted.has(r.id)) {
-      if (!found.has(r.id)) found.set(r.id, Float64Array.from(r.values));
+      if (!found.has(r.id)) {
+        found.set(r.id, Float64Array.from(r.values));
+        if (r.line !== null) lineOf.set(r.id, r.line);
+      }
       continue;
     }
     for (const name of wanted) if (!found.has(name)) closest.get(name)?.consider(r.id);
@@ -110,10 +117,20 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
     );
   }
   const components = [...found.keys()];
-  const reduced: CaseTable = { orientation: "columns", cases: first.cases, components, values: components.map((c) => found.get(c) as Float64Array), map: first.map };
+  const reduced: CaseTable = {
+    orientation: "columns",
+    cases: first.cases,
+    components,
+    values: components.map((c) => found.get(c) as Float64Array),
+    map: first.map,
+    componentPlaces: components.map((c) => ({ row: (lineOf.get(c) ?? 1) - 1, column: 0 })),
+  };
   const criteria = criteriaOrFail(options.criterion, components);
   const chosenRows = governing(plan, reduced, criteria, { rowLimit: rowLimitOf(options.rowLimit) });
-  if (!chosenRows.ok) throw cliErrorOf(chosenRows.problems.map((p) => `${file}: ${withRowLimitHint(p)}`));
+  if (!chosenRows.ok) {
+    if (chosenRows.problems.some((p) => p.kind === "result-not-finite")) throw problemsInFile(file, chosenRows.problems, csvLocator((row) => row + 1));
+    throw cliErrorOf(chosenRows.problems.map((p) => `${file}: ${withRowLimitHint(p)}`));
+  }
   const rows = chosenRows.value;
   await writePreamble(io, prepared);
 
@@ -133,7 +150,7 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
       io.out.line(`${g === 0 ? "" : ","}${JSON.stringify(head).slice(0, -1)},"values":{`);
       let firstValue = true;
       for await (const r of resultsOf(await reopen(), `governing (row ${g + 1} of ${rows.length})`)) {
-        const v = finiteOrFail(rowValue(plan, row.row, r.values), file, r.where);
+        const v = finiteOrFail(rowValue(plan, row.row, r.values), file, r.place, r.id, row.label);
         io.out.line(`${firstValue ? "" : ","}${JSON.stringify(r.id)}:${JSON.stringify(jsonNumber(v))}`);
         firstValue = false;
         await io.out.maybeFlush();
@@ -156,7 +173,7 @@ async function governingOfStream(file: string, prepared: Prepared, first: CaseSt
   const idTitle = first.idHeaders.filter((h) => h !== "").join(" / ") || "result";
   const writer = rowWriter(format, io.out, [{ title: idTitle }, ...rows.map((g, k) => ({ title: columnTitle(g, k), align: "right" as const }))]);
   for await (const r of resultsOf(await reopen(), "governing (concurrent values)")) {
-    await writer.row([r.id, ...rows.map((g) => numberText(finiteOrFail(rowValue(plan, g.row, r.values), file, r.where)))]);
+    await writer.row([r.id, ...rows.map((g) => numberText(finiteOrFail(rowValue(plan, g.row, r.values), file, r.place, r.id, g.label)))]);
     if (io.out.isClosed) return;
   }
   await writer.end();

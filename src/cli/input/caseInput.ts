@@ -87,6 +87,8 @@ export interface CaseFile {
   kind: "table";
   file: string;
   table: CaseTable;
+  /** The file's line and column of a cell of the table read (for a problem found after reading, such as a sum past the largest number). */
+  at: CellLocator;
 }
 
 export type CaseInput = CaseStream | CaseFile;
@@ -175,8 +177,9 @@ function wholeTable(file: string, records: CsvRecord[], ruleset: Ruleset, option
   const matrix: Cell[][] = records.map((r) => (r.cells.every(isBlank) ? new Array<Cell>(width).fill(null) : r.cells));
   const orientation = options.layout === "auto" ? leaningOrientation(matrix, options.idColumns, reads) : options.layout;
   const table = readCaseTable(matrix, ruleset, { orientation, idColumns: options.idColumns, map: options.map, numbersAsText: true });
-  if (!table.ok) throw problemsInFile(file, table.problems, csvLocator((row) => lines[row] ?? row + 1));
-  return { kind: "table", file, table: table.value };
+  const at = csvLocator((row) => lines[row] ?? row + 1);
+  if (!table.ok) throw problemsInFile(file, table.problems, at);
+  return { kind: "table", file, table: table.value, at };
 }
 
 /**
@@ -276,7 +279,8 @@ function caseStream(
     for (let k = 0; k < caseCount; k++) {
       const c = k + idColumns;
       let v = decimalAt(buf, fieldStart[c], fieldEnd[c]);
-      if (v !== v) v = readValue(source.text(c), { row, column: c }, cases[k].header, VALUE_OPTIONS, problems);
+      // Not a plain decimal (NaN), or one beyond the largest double ("1e400" is Infinity): the core reads the text, and refuses the latter.
+      if (v - v !== 0) v = readValue(source.text(c), { row, column: c }, cases[k].header, VALUE_OPTIONS, problems);
       batch.values[base + k] = v;
     }
     for (let c = named; c < width; c++) if (!fieldBlank(source, c)) throw refuseUnnamed(c, line);
@@ -308,8 +312,9 @@ function caseStream(
           await source.refill();
         }
       } catch (e) {
-        // The rows before a bad one are given first, as a row-by-row reader gives them; then the error.
-        stopped = e;
+        // The rows before a bad one are given first, as a row-by-row reader gives them; then the error —
+        // unless the file was cut meanwhile, which is what the "bad row" then is.
+        stopped = e instanceof CliError ? ((await source.shrinkError()) ?? e) : e;
       }
       if (batch.count > 0) {
         count += batch.count;
@@ -393,7 +398,7 @@ function openJsonCases(file: string, ruleset: Ruleset, options: CaseFileOptions)
   });
   const table = readCaseTable(matrix, ruleset, { orientation: options.layout, idColumns: options.idColumns, map: options.map, numbersAsText: false });
   if (!table.ok) throw problemsInFile(file, table.problems, at);
-  return { kind: "table", file, table: table.value };
+  return { kind: "table", file, table: table.value, at };
 }
 
 function lineColumn(text: string, path: (string | number)[]): string {

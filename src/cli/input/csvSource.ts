@@ -7,7 +7,7 @@
  * own. Records come from `next()` without waiting while bytes are at hand:
  * "wait" asks the caller to `await refill()` first.
  */
-import { open, type FileHandle } from "node:fs/promises";
+import { open, stat, type FileHandle } from "node:fs/promises";
 import { CliError } from "../cliError.js";
 import { readCsv, type CsvReader, type CsvRecord } from "./csvRecords.js";
 import { CsvScanner, ESCAPED } from "./csvScanner.js";
@@ -15,6 +15,8 @@ import { fileErrorText } from "./fileAccess.js";
 
 /** Bytes read at a time: large reads keep the file system's cost per byte small. */
 const CHUNK = 4 << 20;
+/** The least buffer a file is read into. */
+const SMALL_BUFFER = 64 << 10;
 
 export type SourceStep = "record" | "end" | "wait";
 
@@ -28,6 +30,8 @@ export class CsvSource {
   private buffer: Buffer;
   private filled = 0;
   private bytesDone = 0;
+  /** The file's size when it was opened: a read that ends short of it means the file was cut while it was read. */
+  private sizeAtOpen = 0;
   private atEnd = false;
   private nextLine = 1;
   private delivered = 0;
@@ -56,7 +60,16 @@ export class CsvSource {
     } catch (e) {
       throw new CliError(`${path}: ${fileErrorText(e)}`);
     }
-    const source = new CsvSource(path, delimiter, file, chunkBytes);
+    let size: number;
+    try {
+      size = (await file.stat()).size;
+    } catch (e) {
+      await file.close();
+      throw new CliError(`${path}: ${fileErrorText(e)}`);
+    }
+    // A small file needs no buffer of a full chunk (allocating 4 MB costs more than reading a few lines); one that grows is read in larger parts.
+    const source = new CsvSource(path, delimiter, file, Math.min(chunkBytes, Math.max(SMALL_BUFFER, size + 1)));
+    source.sizeAtOpen = size;
     await source.read();
     const b = source.buffer;
     const oneByte = Buffer.byteLength(delimiter, "utf8") === 1 && !/[\d+\-.eE\s]/.test(delimiter);
@@ -117,8 +130,10 @@ export class CsvSource {
     }
     if (this.general) {
       const next = await this.general.records.next();
-      if (next.done) this.generalDone = true;
-      else this.pending = next.value;
+      if (next.done) {
+        this.generalDone = true;
+        this.checkWhole(this.general.bytesRead());
+      } else this.pending = next.value;
       return;
     }
     // Keep what is left of the record being scanned, then read after it.
@@ -175,7 +190,37 @@ export class CsvSource {
       // One read per refill is enough unless the buffer is nearly empty.
       if (this.filled > this.buffer.length / 2) break;
     }
-    if (this.atEnd) await this.closeFile();
+    if (this.atEnd) {
+      await this.closeFile();
+      this.checkWhole(this.bytesDone);
+    }
+  }
+
+  /**
+   * Where reading stopped on a problem (a ragged row, a quote left open): if the
+   * file is now shorter than when it was opened, that problem is most likely the
+   * cut itself, and saying so is what the user can act on. Null otherwise.
+   */
+  async shrinkError(): Promise<CliError | null> {
+    try {
+      const now = (await stat(this.path)).size;
+      if (now >= this.sizeAtOpen) return null;
+      const n = (x: number) => x.toLocaleString("en-US");
+      return new CliError(`${this.path}: the file shrank while it was read (it holds ${n(now)} of the ${n(this.sizeAtOpen)} bytes it held when opened); another program changed it meanwhile: run again once it is complete`);
+    } catch {
+      return null;
+    }
+  }
+
+  /**
+   * The end came after `read` bytes: fewer than the file held when it was opened
+   * means another program cut it meanwhile (an export being rewritten), and the
+   * rows read would be silently fewer. A file that grows is read to its end.
+   */
+  private checkWhole(read: number): void {
+    if (read >= this.sizeAtOpen) return;
+    const n = (x: number) => x.toLocaleString("en-US");
+    throw new CliError(`${this.path}: the file shrank while it was read (it ended after ${n(read)} of the ${n(this.sizeAtOpen)} bytes it held when opened); another program changed it meanwhile: run again once it is complete`);
   }
 
   private async closeFile(): Promise<void> {

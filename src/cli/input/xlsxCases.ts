@@ -207,7 +207,7 @@ function wholeTable(
   const orientation = options.layout === "auto" ? leaningOrientation(matrix, options.idColumns, reads) : options.layout;
   const read = readCaseTable(matrix, ruleset, { orientation, idColumns: options.idColumns, map: options.map, numbersAsText: false });
   if (!read.ok) throw problemsInFile(file, read.problems, at);
-  return { kind: "table", file, table: read.value };
+  return { kind: "table", file, table: read.value, at };
 }
 
 const BLANK_ROW: Cell[] = [];

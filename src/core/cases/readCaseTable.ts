@@ -11,7 +11,7 @@
  * Internally both become values[component][case], where a "component" is a
  * result row of a cases-as-columns table. Blank value cells read as zero.
  */
-import { cellText, isBlank, type Cell } from "../cells.js";
+import { cellText, isBlank, widthOf, type Cell } from "../cells.js";
 import { fail, ok, problem, type Problem, type Result } from "../problems.js";
 import type { Ruleset } from "../ruleset/model.js";
 import { EMPTY_CASE_MAP, namesLoadSymbol, readCaseHeaders, type CaseMap, type LoadCase } from "./caseHeaders.js";
@@ -28,6 +28,8 @@ export interface CaseTable {
   /** values[component][case] */
   values: Float64Array[];
   map: CaseMap;
+  /** Where each component was named (its header cell, or a result row's first id cell) in the matrix read, for locating a problem with its values. */
+  componentPlaces?: { row: number; column: number }[];
 }
 
 export interface CaseTableOptions {
@@ -44,7 +46,7 @@ export function readCaseTable(matrix: Cell[][], ruleset: Ruleset, options: CaseT
   const map = options.map ?? EMPTY_CASE_MAP;
   const idColumns = options.idColumns ?? 1;
   const rows = trimBlankEdges(matrix);
-  const width = Math.max(0, ...rows.map((r) => r.length));
+  const width = widthOf(rows);
   if (rows.length < 2 || width < 2) {
     return fail(problem("cases-empty", "the case table needs a header row, a header column and at least one value"));
   }
@@ -66,7 +68,7 @@ export function readCaseTable(matrix: Cell[][], ruleset: Ruleset, options: CaseT
 function trimBlankEdges(matrix: Cell[][]): Cell[][] {
   let rows = matrix.length;
   while (rows > 0 && matrix[rows - 1].every(isBlank)) rows--;
-  let width = Math.max(0, ...matrix.slice(0, rows).map((r) => r.length));
+  let width = widthOf(matrix.slice(0, rows));
   while (width > 0 && matrix.slice(0, rows).every((r) => isBlank(r[width - 1]))) width--;
   return matrix.slice(0, rows).map((r) => (r.length > width ? r.slice(0, width) : r));
 }
@@ -101,7 +103,7 @@ function readCasesAsRows(rows: Cell[][], ruleset: Ruleset, map: CaseMap, options
   const problems: Problem[] = [];
   const body = rows.slice(1).map((r, i) => ({ cells: r, row: i + 1 })).filter((r) => !r.cells.every(isBlank));
   const headers = readCaseHeaders(body.map((r) => r.cells[0]), ruleset, map, (i) => ({ row: body[i].row, column: 0 }));
-  if (!headers.ok) problems.push(...headers.problems);
+  if (!headers.ok) for (const p of headers.problems) problems.push(p);
   const components = componentNames(rows[0].slice(1), (i) => ({ row: 0, column: i + 1 }), problems);
   if (problems.length > 0 || !headers.ok) return fail(...problems);
   const values = components.map(() => new Float64Array(body.length));
@@ -112,7 +114,8 @@ function readCasesAsRows(rows: Cell[][], ruleset: Ruleset, map: CaseMap, options
     }
   });
   if (problems.length > 0) return fail(...problems);
-  return ok({ orientation: "rows", cases: headers.value, components, values, map });
+  const componentPlaces = components.map((_, c) => ({ row: 0, column: c + 1 }));
+  return ok({ orientation: "rows", cases: headers.value, components, values, map, componentPlaces });
 }
 
 function readCasesAsColumns(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idColumns: number, options: CaseTableOptions): Result<CaseTable> {
@@ -123,17 +126,19 @@ function readCasesAsColumns(rows: Cell[][], ruleset: Ruleset, map: CaseMap, idCo
   const reader = resultRowReader(cases, { idColumns, numbersAsText: options.numbersAsText ?? false });
   const components: string[] = [];
   const values: Float64Array[] = [];
+  const componentPlaces: { row: number; column: number }[] = [];
   for (let r = 1; r < rows.length; r++) {
     const row = reader.read(rows[r], r);
-    if (!row.ok) problems.push(...row.problems);
+    if (!row.ok) for (const p of row.problems) problems.push(p);
     else if (row.value) {
       components.push(row.value.id);
       values.push(row.value.values);
+      componentPlaces.push({ row: r, column: 0 });
     }
   }
   if (problems.length > 0) return fail(...problems);
   if (components.length === 0) return fail(problem("cases-empty", "the case table has no result rows"));
-  return ok({ orientation: "columns", cases, components, values, map });
+  return ok({ orientation: "columns", cases, components, values, map, componentPlaces });
 }
 
 function componentNames(cells: Cell[], at: (i: number) => { row: number; column: number }, problems: Problem[]): string[] {

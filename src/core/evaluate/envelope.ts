@@ -8,6 +8,7 @@ import { fail, ok, type Result } from "../problems.js";
 import type { Plan, RowRef } from "../plan/types.js";
 import { compiledPlanOf, rowRefOf } from "../plan/compiledPlan.js";
 import { sharedEvaluator } from "./extremes.js";
+import { notFiniteProblem, type ComponentPlace } from "./notFinite.js";
 import { labelOf, noRows } from "./rows.js";
 
 export interface EnvelopeValue {
@@ -26,21 +27,22 @@ export interface EnvelopeEntry {
 export function envelope(plan: Plan, table: CaseTable): Result<EnvelopeEntry[]> {
   const out: EnvelopeEntry[] = [];
   for (let c = 0; c < table.components.length; c++) {
-    const entry = envelopeOf(plan, table.components[c], table.values[c]);
-    if (!entry) return fail(noRows(plan));
-    out.push(entry);
+    const entry = envelopeOf(plan, table.components[c], table.values[c], table.componentPlaces?.[c]);
+    if (!entry.ok) return entry;
+    out.push(entry.value);
   }
   return ok(out);
 }
 
-/** One component's envelope from its case values. */
-export function envelopeOf(plan: Plan, result: string, x: ArrayLike<number>): EnvelopeEntry | null {
+/** One component's envelope from its case values; a row without a finite value is refused, naming the component (at `place`) and the row. */
+export function envelopeOf(plan: Plan, result: string, x: ArrayLike<number>, place?: ComponentPlace): Result<EnvelopeEntry> {
   const compiled = compiledPlanOf(plan);
   const e = sharedEvaluator(compiled).evaluate(x);
-  if (!e) return null;
-  return {
+  if (!e) return fail(noRows(plan));
+  if (!e.finite) return fail(notFiniteProblem(JSON.stringify(result), labelOf(compiled, e.faultBranch, e.faultChoices), place));
+  return ok({
     result,
     max: { value: e.maxValue, row: rowRefOf(compiled, e.maxBranch, e.maxChoices), label: labelOf(compiled, e.maxBranch, e.maxChoices) },
     min: { value: e.minValue, row: rowRefOf(compiled, e.minBranch, e.minChoices), label: labelOf(compiled, e.minBranch, e.minChoices) },
-  };
+  });
 }

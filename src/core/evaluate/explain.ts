@@ -11,6 +11,7 @@ import { nearest } from "../text/nearest.js";
 import type { Sum } from "../expression/ast.js";
 import { valueNames } from "../expression/valueNames.js";
 import type { Parameter } from "../ruleset/model.js";
+import { notFiniteProblem } from "./notFinite.js";
 import { enumerateRows, rowContributions, rowLabel, rowValue, sameLabel } from "./rows.js";
 
 export interface ExplanationLine {
@@ -79,6 +80,9 @@ export function explain(plan: Plan, table: CaseTable, row: string | number, comp
   const total = rowValue(plan, ref, x);
   const { combination } = plan.combinations[ref.combination];
   const label = rowLabel(plan, ref);
+  if (!Number.isFinite(total) || lines.some((l) => !Number.isFinite(l.product))) {
+    return fail(notFiniteProblem(JSON.stringify(table.components[componentIndex]), label, table.componentPlaces?.[componentIndex]));
+  }
   const parameters = parametersRead(plan, combination.sum).map((p) => {
     const value = p.kind === "choice" ? (plan.parameters.choices.get(p.name) ?? p.default) : (plan.parameters.numbers.get(p.name) ?? 0);
     return { name: p.name, value, given: plan.parameters.given.has(p.name) };

@@ -8,6 +8,7 @@ import { fail, ok, type Result } from "../problems.js";
 import type { Plan, RowRef } from "../plan/types.js";
 import { criterionFault, evaluateCriterion, parseCriterion, type Affine, type Criterion } from "./criteria.js";
 import { extremes } from "./extremes.js";
+import { notFiniteProblem } from "./notFinite.js";
 import { DEFAULT_ROW_LIMIT, enumerateRows, noRows, rowLabel, rowValues, tooManyRows } from "./rows.js";
 
 export interface GoverningRow {
@@ -48,11 +49,13 @@ export function governing(plan: Plan, table: CaseTable, criteria: Criterion[], o
       const x = project(table, criterion.linear);
       const e = extremes(plan, x);
       if (!e) return fail(noRows(plan));
+      if (e.notFinite) return fail(notFiniteProblem(`criterion "${criterion.text}"`, rowLabel(plan, e.notFinite)));
       chosen.push({ criterion, row: criterion.sense === "max" ? e.max.row : e.min.row });
     } else if (criterion.absLinear) {
       const x = project(table, criterion.absLinear);
       const e = extremes(plan, x);
       if (!e) return fail(noRows(plan));
+      if (e.notFinite) return fail(notFiniteProblem(`criterion "${criterion.text}"`, rowLabel(plan, e.notFinite)));
       const c = criterion.absLinear.constant;
       chosen.push({ criterion, row: Math.abs(e.max.value + c) >= Math.abs(e.min.value + c) ? e.max.row : e.min.row });
     } else {
@@ -84,7 +87,11 @@ export function governing(plan: Plan, table: CaseTable, criteria: Criterion[], o
   const byKey = new Map<string, GoverningRow>();
   for (const { criterion, row } of chosen) {
     const values = rowValues(plan, table, row);
+    // Every concurrent value is shown: one past the largest double is refused with its component, as the criterion's own value is.
+    const c = values.findIndex((v) => !Number.isFinite(v));
+    if (c >= 0) return fail(notFiniteProblem(JSON.stringify(table.components[c]), rowLabel(plan, row), table.componentPlaces?.[c]));
     const value = evaluateCriterion(criterion.expr, values);
+    if (!Number.isFinite(value)) return fail(criterionFault(criterion, values, rowLabel(plan, row)));
     const key = `${row.combination}/${row.branch}/${row.choices.join(",")}`;
     const existing = byKey.get(key);
     if (existing) {

@@ -103,12 +103,13 @@ export function compilePlan(plan: Plan): CompiledPlan {
         let id = termIds.get(key);
         if (id === undefined) {
           termIds.set(key, (id = termIds.size));
-          termOptions.push(...options);
+          // A loop, not a spread: a term may have 200,000 options (100,000 cases of a reversible symbol).
+          for (const o of options) termOptions.push(o);
           termStart.push(termOptions.length);
         }
         return id;
       });
-      branchTerms.push(...ids);
+      for (const t of ids) branchTerms.push(t);
       branchStart.push(branchTerms.length);
       branchCombination.push(c);
       branchWithin.push(b);
@@ -121,7 +122,7 @@ export function compilePlan(plan: Plan): CompiledPlan {
         strides[t] = step;
         step *= sizes[t];
       }
-      termStride.push(...strides);
+      for (const stride of strides) termStride.push(stride);
       branchFirstRow.push(rows);
       // A branch with a term of no options has no rows (enumerateRows skips it).
       if (!sizes.includes(0)) rows += step;

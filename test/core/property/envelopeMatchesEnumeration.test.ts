@@ -275,3 +275,60 @@ function plainExtremes(plan: Plan, x: ArrayLike<number>): { max: { value: number
   );
   return max && min ? { max, min } : null;
 }
+
+/**
+ * Case values near the largest double (about 1.8 × 10^308, IEEE 754 binary64):
+ * a factored sum may pass it (±Infinity), and +Infinity and −Infinity in one
+ * row give NaN, which no comparison picks — a max or min that skipped it would
+ * be a silent wrong number. The fast evaluation must say "not finite" exactly
+ * when some concrete row's value (summed row by row over the plan, in the
+ * plan's order, as rowValue does) is not finite, and name such a row.
+ */
+describe("rows without a finite value", () => {
+  /** Magnitudes that overflow under factors above 1, cancel to NaN, or stay finite. */
+  const HOSTILE = [1.7e308, -1.7e308, 1e308, -1e308, 9e307, 1, -1, 0, 5e-324];
+  const hostileScenario = scenario.chain((s) =>
+    fc.array(fc.nat(HOSTILE.length - 1), { minLength: 64, maxLength: 64 }).map((picks) => {
+      let k = 0;
+      const matrix = s.matrix.map((row, r) => (r === 0 ? row : row.map((cell, c) => (c === 0 || cell === null ? cell : HOSTILE[picks[k++ % picks.length]]))));
+      return { file: s.file, matrix, [fc.toStringMethod]: () => JSON.stringify({ expressions: s.file.combinations.map((c) => c.expression), matrix }) };
+    }),
+  );
+
+  test("are found exactly when the row-by-row values hold one, and the row named is one of them", () => {
+    let faults = 0;
+    let finite = 0;
+    fc.assert(
+      fc.property(hostileScenario, (generated) => {
+        const c = build(generated);
+        fc.pre(c !== null);
+        const { plan, table } = c as Case;
+        const evaluator = extremesEvaluator(compilePlan(plan));
+        for (const x of table.values) {
+          const found = evaluator.evaluate(x);
+          const rows = [...enumerateRows(plan)];
+          if (found === null) {
+            expect(rows).toEqual([]);
+            continue;
+          }
+          const anyNotFinite = rows.some((ref) => !Number.isFinite(rowValue(plan, ref, x)));
+          expect(found.finite, "finite").toBe(!anyNotFinite);
+          if (found.finite) {
+            finite++;
+            continue;
+          }
+          faults++;
+          const named = rowRefOf(evaluator.compiled, found.faultBranch, found.faultChoices);
+          expect(Number.isFinite(rowValue(plan, named, x))).toBe(false);
+          // The whole-table envelope refuses it, naming the component and that row.
+          const e = extremes(plan, x);
+          expect(e?.notFinite).toEqual(named);
+        }
+      }),
+      { numRuns: 400, seed: 308 },
+    );
+    // Both kinds were met, so the check is not empty.
+    expect(faults).toBeGreaterThan(50);
+    expect(finite).toBeGreaterThan(50);
+  });
+});
