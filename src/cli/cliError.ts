@@ -3,6 +3,8 @@
  * where the problem is (file, line and column, ruleset entry, option); the
  * command line prints it without a stack trace and exits non-zero.
  */
+import { countText } from "../core/index.js";
+
 export class CliError extends Error {
   constructor(
     message: string,
@@ -35,6 +37,6 @@ export function cliErrorOf(lines: string[]): CliError {
   const listed = lines.slice(0, MAX_LISTED_PROBLEMS);
   const rest = lines.length - listed.length;
   const more = listed.slice(1);
-  if (rest > 0) more.push(`… and ${rest} more problem${rest === 1 ? "" : "s"}`);
+  if (rest > 0) more.push(`… and ${countText(rest)} more problem${rest === 1 ? "" : "s"}`);
   return new CliError(listed[0] ?? "unknown problem", more);
 }

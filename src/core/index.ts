@@ -22,7 +22,7 @@ export {
 export { loadRuleset } from "./ruleset/loadRuleset.js";
 export { duplicateKeys, jsonSyntaxError, type DuplicateKey } from "./ruleset/jsonSyntax.js";
 export { jsonTextProblem, jsonValueProblems } from "./ruleset/jsonLimits.js";
-export { LIMITS, FORBIDDEN_KEYS } from "./limits.js";
+export { LIMITS, FORBIDDEN_KEYS, countText } from "./limits.js";
 export { rulesetFromRows } from "./ruleset/rulesetFromRows.js";
 export { typedRuleset, clearTypedRulesets, TYPED_RULESET_LIMIT, type TypedRuleset } from "./ruleset/typedRulesets.js";
 export { SYMBOL_CATALOGUE } from "./ruleset/catalogue.js";

@@ -78,7 +78,7 @@ function optionProblem(kind: ProblemKind, message: string, place: Entry["place"]
 
 /** Two-cell rows, or cells of "name=value; …" text in a single column. */
 function readEntries(m: Cell[][]): Result<Entry[]> {
-  const width = Math.max(0, ...m.map((r) => r.length));
+  const width = m.reduce((w, r) => Math.max(w, r.length), 0);
   const out: Entry[] = [];
   const problems: Problem[] = [];
   m.forEach((row, r) => {

@@ -12,7 +12,7 @@ export const NO_PARAMETERS: GivenParameters = { input: {}, where: new Map() };
 export function readParamsArgument(raw: unknown): Result<GivenParameters> {
   const m = asMatrix(raw);
   if (m === null || isEmptyArgument(m)) return { ok: true, value: NO_PARAMETERS };
-  const width = Math.max(0, ...m.map((r) => r.length));
+  const width = m.reduce((w, r) => Math.max(w, r.length), 0);
   return width >= 2 ? pairs(blankZeroRows(m)) : texts(m);
 }
 

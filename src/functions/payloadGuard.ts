@@ -31,7 +31,13 @@ export function payloadProblem(formula: string, shape: PayloadShape): Problem | 
   return problem(
     "too-many-rows",
     `${formula} would return about ${mb} MB (${shape.rows.toLocaleString("en-US")} rows × ${columns.toLocaleString("en-US")} columns), ` +
-      `more than the about 5 MB Excel accepts from one formula; use LW.ENVELOPE or LW.GOVERNING, which find the extremes exactly without listing every row, ` +
-      `or the Loadwright command line for the full listing`,
+      `more than the about 5 MB Excel accepts from one formula; ${smallerWay(formula)}`,
   );
+}
+
+/** What to do instead, naming only formulas other than the one refused. */
+function smallerWay(formula: string): string {
+  const others = ["LW.ENVELOPE", "LW.GOVERNING"].filter((f) => f !== formula);
+  const extremes = others.length > 0 ? `use ${others.join(" or ")}, which ${others.length === 1 ? "finds" : "find"} the extremes exactly without listing every row, or ` : "";
+  return `${extremes}give a smaller case table (fewer result rows), or use the Loadwright command line, which streams whole exports`;
 }

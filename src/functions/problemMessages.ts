@@ -4,7 +4,7 @@
  * parameter addresses), the header, the combination and character position,
  * then the core's sentence. "cases, Loads!C5 (W:N / V): "abc" is not a number".
  */
-import { describePlace, type Problem } from "../core/index.js";
+import { countText, describePlace, type Problem } from "../core/index.js";
 import { asMatrix } from "./excelCells.js";
 import { PROBLEM_ARGUMENT } from "./argumentKinds.js";
 import type { ArgumentSpec, FormulaArguments } from "./formula.js";
@@ -66,7 +66,9 @@ export function problemText(p: Problem, at: ArgumentAt | null, args: FormulaArgu
   const described = describePlace(rest);
   if (described !== "") parts.push(described);
   let where = parts.join(", ");
-  if (place.header !== undefined && !sentence.includes(place.header)) where += where === "" ? `(${place.header})` : ` (${place.header})`;
+  // The header is named unless the sentence already names it as a word ("L" in 'case header "L" appears
+  // twice', rho in "parameter rho = 1.2"): a letter inside another word (the T of TRUE) is not a mention.
+  if (place.header !== undefined && !mentions(sentence, place.header)) where += where === "" ? `(${place.header})` : ` (${place.header})`;
   const prefix = at ? (where === "" ? at.spec.name : `${at.spec.name}, ${where}`) : where;
   return prefix === "" ? sentence : `${prefix}: ${sentence}`;
 }
@@ -75,5 +77,16 @@ export function problemText(p: Problem, at: ArgumentAt | null, args: FormulaArgu
 export function problemsText(texts: string[]): string {
   const shown = texts.slice(0, MAX_PROBLEMS_SHOWN).join(" | ");
   const more = texts.length - MAX_PROBLEMS_SHOWN;
-  return more > 0 ? `${shown} | (and ${more} more problem${more === 1 ? "" : "s"})` : shown;
+  return more > 0 ? `${shown} | (and ${countText(more)} more problem${more === 1 ? "" : "s"})` : shown;
+}
+
+/** Whether a sentence names this header as a word of its own, not as letters inside another word. */
+function mentions(sentence: string, header: string): boolean {
+  const wordy = /[\p{L}\p{N}_]/u;
+  for (let at = sentence.indexOf(header); at !== -1; at = sentence.indexOf(header, at + 1)) {
+    const before = at === 0 ? "" : sentence[at - 1];
+    const after = sentence[at + header.length] ?? "";
+    if (!wordy.test(before) && !wordy.test(after)) return true;
+  }
+  return false;
 }

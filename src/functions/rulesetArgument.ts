@@ -57,7 +57,7 @@ function typed(rows: Cell[][]): Result<ResolvedRuleset> {
   const loaded = typedRuleset(rows);
   if (!loaded.ok) return loaded;
   const { ruleset, status } = loaded.value;
-  const width = Math.max(0, ...rows.map((r) => r.length));
+  const width = rows.reduce((w, r) => Math.max(w, r.length), 0);
   return {
     ok: true,
     value: {

@@ -48,7 +48,7 @@ export function axisTicks(low: number, high: number): number[] {
 
 export function rowChart(rows: readonly ChartRow[], options: ChartOptions): Html {
   const values = rows.map((r) => r.value);
-  const ticks = axisTicks(Math.min(...values), Math.max(...values));
+  const ticks = axisTicks(values.reduce((a, v) => Math.min(a, v), Infinity), values.reduce((a, v) => Math.max(a, v), -Infinity));
   const low = ticks[0];
   const high = ticks[ticks.length - 1];
   const plotWidth = WIDTH - LEFT - RIGHT;

@@ -18,7 +18,7 @@ const HEADER_WORDS = ["id", "expression", "clause"];
 
 export function rulesetFromRows(rows: Cell[][]): Result<Ruleset> {
   const problems: Problem[] = [];
-  const width = Math.max(0, ...rows.map((r) => r.length));
+  const width = rows.reduce((w, r) => Math.max(w, r.length), 0);
   if (width === 0 || width > 3) {
     return fail(
       problem("ruleset-field", `a ruleset range has 1 to 3 columns ([id, expression, clause]); this one has ${width}`),
