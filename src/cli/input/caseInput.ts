@@ -31,6 +31,7 @@ import { CsvSource } from "./csvSource.js";
 import { checkReadable, readText } from "./fileAccess.js";
 import { offsetOfPath, positionOf, syntaxErrorOffset } from "./jsonLocation.js";
 import { csvLocator, describeInFile, type CellLocator } from "./locate.js";
+import { BATCH_ROWS, batchesOf, emptyBatch, rowsOf, type ResultRow, type RowBatch } from "./rowBatches.js";
 import { openXlsxCases } from "./xlsxCases.js";
 
 export type Layout = Orientation | "auto";
@@ -46,23 +47,6 @@ export interface CaseFileOptions {
   /** An .xlsx workbook: the worksheet (default the first) and the range (default the used range). */
   sheet?: string | undefined;
   range?: string | undefined;
-}
-
-/** Result rows of a cases-as-columns file, a batch at a time; the batch is reused, so read it before asking for the next. */
-export interface RowBatch {
-  count: number;
-  ids: string[];
-  /** count × cases values, row after row, in the order of `cases`. */
-  values: Float64Array;
-  lines: Int32Array;
-}
-
-/** One result row of a cases-as-columns file. */
-export interface ResultRow {
-  id: string;
-  /** Value per case, in the order of `cases`. */
-  values: Float64Array;
-  line: number;
 }
 
 export interface CaseStream {
@@ -232,7 +216,7 @@ function caseStream(
   const at = csvLocator((row) => lines.lineOf(row));
   let nextRow = 1;
 
-  const batch: RowBatch = { count: 0, ids: new Array<string>(BATCH_ROWS), values: new Float64Array(BATCH_ROWS * caseCount), lines: new Int32Array(BATCH_ROWS) };
+  const batch = emptyBatch(caseCount);
   const problems: Problem[] = [];
 
   const refuseUnnamed = (column: number, line: number) =>
@@ -290,49 +274,33 @@ function caseStream(
     batch.lines[n] = line;
   };
 
-  async function* batches(): AsyncGenerator<RowBatch> {
-    let count = 0;
-    let stopped: unknown = null;
-    try {
-      try {
-        for (const record of buffered) addCells(record);
-        for (;;) {
-          const step = source.next();
-          if (step === "record") {
-            if (source.fromBytes) addScanned();
-            else addCells(source.record());
-            if (batch.count === BATCH_ROWS) {
-              count += batch.count;
-              yield batch;
-              batch.count = 0;
-            }
-            continue;
-          }
-          if (step === "end") break;
-          await source.refill();
-        }
-      } catch (e) {
-        // The rows before a bad one are given first, as a row-by-row reader gives them; then the error —
-        // unless the file was cut meanwhile, which is what the "bad row" then is.
-        stopped = e instanceof CliError ? ((await source.shrinkError()) ?? e) : e;
-      }
-      if (batch.count > 0) {
-        count += batch.count;
-        yield batch;
-        batch.count = 0;
-      }
-      if (stopped !== null) throw stopped instanceof Error ? stopped : new Error("reading the case file stopped on a value that is not an error");
-      if (count === 0) throw new CliError(`${file}: the case table has no result rows below its header row`);
-    } finally {
-      await source.close();
+  let bufferedRead = false;
+  const fill = async (): Promise<boolean> => {
+    if (!bufferedRead) {
+      bufferedRead = true;
+      for (const record of buffered) addCells(record);
     }
-  }
-
-  async function* rows(): AsyncGenerator<ResultRow> {
-    for await (const b of batches()) {
-      for (let n = 0; n < b.count; n++) yield { id: b.ids[n], values: b.values.slice(n * caseCount, (n + 1) * caseCount), line: b.lines[n] };
+    for (;;) {
+      const step = source.next();
+      if (step === "record") {
+        if (source.fromBytes) addScanned();
+        else addCells(source.record());
+        if (batch.count === BATCH_ROWS) return true;
+        continue;
+      }
+      if (step === "end") return false;
+      await source.refill();
     }
-  }
+  };
+  const batches = (): AsyncGenerator<RowBatch> =>
+    batchesOf(batch, {
+      fill,
+      // Unless the file was cut meanwhile, which is what the "bad row" then is.
+      stoppedBy: async (e) => (e instanceof CliError ? ((await source.shrinkError()) ?? e) : e),
+      empty: () => new CliError(`${file}: the case table has no result rows below its header row`),
+      what: "the case file",
+      close: () => source.close(),
+    });
 
   return {
     kind: "stream",
@@ -341,15 +309,13 @@ function caseStream(
     map: options.map,
     idHeaders: header.cells.slice(0, idColumns).map(cellText),
     batches: batches(),
-    rows: rows(),
+    rows: rowsOf(batches(), caseCount),
     totalBytes,
     bytesRead: () => source.bytesRead(),
     close: () => source.close(),
   };
 }
 
-/** Result rows handed over at a time: enough to make the cost per batch negligible, few enough to stay small. */
-const BATCH_ROWS = 1024;
 const VALUE_OPTIONS = { numbersAsText: true };
 
 /** A field is blank as the core's isBlank says: nothing but white space. */

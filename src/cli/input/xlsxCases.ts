@@ -27,7 +27,8 @@ import {
 } from "../../core/index.js";
 import { sheetPrefix } from "../../sheet/sheetArea.js";
 import { CliError } from "../cliError.js";
-import { lastNonBlank, leaningOrientation, problemsInFile, type CaseFile, type CaseFileOptions, type CaseInput, type CaseStream, type RowBatch } from "./caseInput.js";
+import { lastNonBlank, leaningOrientation, problemsInFile, type CaseFile, type CaseFileOptions, type CaseInput, type CaseStream } from "./caseInput.js";
+import { BATCH_ROWS, batchesOf, emptyBatch, rowsOf, type RowBatch } from "./rowBatches.js";
 import type { CellLocator } from "./locate.js";
 import { readWorkbookIndex } from "./workbookCells.js";
 import { MAX_WORKBOOK_BYTES, WorkbookPackage, type PackageLimits } from "./workbookPackage.js";
@@ -234,7 +235,7 @@ async function sheetStream(
   const cases = headers.value;
   const caseCount = cases.length;
   const reader = resultRowReader(cases, { idColumns, numbersAsText: false });
-  const batch: RowBatch = { count: 0, ids: new Array<string>(BATCH_ROWS), values: new Float64Array(BATCH_ROWS * caseCount), lines: new Int32Array(BATCH_ROWS) };
+  const batch = emptyBatch(caseCount);
   let lastRow = headerRow;
 
   const add = (record: SheetRecord): void => {
@@ -252,43 +253,34 @@ async function sheetStream(
     batch.lines[n] = record.row;
   };
 
-  async function* batches(): AsyncGenerator<RowBatch> {
-    let count = 0;
-    let stopped: unknown = null;
-    try {
-      try {
-        for (const record of buffered) add(record);
-        for await (const record of rows.records) {
-          add(record);
-          if (batch.count === BATCH_ROWS) {
-            count += batch.count;
-            yield batch;
-            batch.count = 0;
-          }
-        }
+  let bufferedRead = false;
+  const fill = async (): Promise<boolean> => {
+    if (!bufferedRead) {
+      bufferedRead = true;
+      for (const record of buffered) add(record);
+    }
+    while (batch.count < BATCH_ROWS) {
+      const next = await rows.records.next();
+      if (next.done) {
         const merged = mergedProblems(rows, table, lastRow, at);
         if (merged.length > 0) throw problemsInFile(file, merged, at);
-      } catch (e) {
-        // The rows before a bad one are given first, as a row-by-row reader gives them; then the error.
-        stopped = e;
+        return false;
       }
-      if (batch.count > 0) {
-        count += batch.count;
-        yield batch;
-        batch.count = 0;
-      }
-      if (stopped !== null) throw stopped instanceof Error ? stopped : new Error("reading the worksheet stopped on a value that is not an error");
-      if (count === 0) throw new CliError(`${file} ${at.row(0)}: the case table has no result rows below its header row`);
-    } finally {
-      await rows.records.return(undefined);
+      add(next.value);
     }
-  }
-
-  async function* resultRows() {
-    for await (const b of batches()) {
-      for (let n = 0; n < b.count; n++) yield { id: b.ids[n], values: b.values.slice(n * caseCount, (n + 1) * caseCount), line: b.lines[n] };
-    }
-  }
+    return true;
+  };
+  const close = async (): Promise<void> => {
+    await rows.records.return(undefined);
+  };
+  const batches = (): AsyncGenerator<RowBatch> =>
+    batchesOf(batch, {
+      fill,
+      stoppedBy: (e) => Promise.resolve(e),
+      empty: () => new CliError(`${file} ${at.row(0)}: the case table has no result rows below its header row`),
+      what: "the worksheet",
+      close,
+    });
 
   return {
     kind: "stream",
@@ -297,12 +289,10 @@ async function sheetStream(
     map: options.map,
     idHeaders: header.cells.slice(0, idColumns).map(cellText),
     batches: batches(),
-    rows: resultRows(),
+    rows: rowsOf(batches(), caseCount),
     totalBytes: partSize,
     bytesRead: () => rows.charactersRead(),
-    close: async () => {
-      await rows.records.return(undefined);
-    },
+    close,
     rowPlace: (line) => at.row(line - headerRow),
   };
 }
@@ -317,5 +307,3 @@ async function refuseHeaders(file: string, problems: Problem[], rows: SheetRows,
   if (firstUnknown) error.more.push(`if column ${columnLetters(table.left - 1 + idColumns)} is part of each result row's name, say how many columns name a row: --id-columns ${idColumns + 1}`);
   throw error;
 }
-
-const BATCH_ROWS = 1024;
