@@ -31,7 +31,7 @@ import { CsvSource } from "./csvSource.js";
 import { checkReadable, readText } from "./fileAccess.js";
 import { offsetOfPath, positionOf, syntaxErrorOffset } from "./jsonLocation.js";
 import { csvLocator, describeInFile, type CellLocator } from "./locate.js";
-import { BATCH_ROWS, batchesOf, emptyBatch, rowsOf, type ResultRow, type RowBatch } from "./rowBatches.js";
+import { BATCH_ROWS, batchesOf, emptyBatch, rowsOf, type BatchSource, type ResultRow, type RowBatch } from "./rowBatches.js";
 import { openXlsxCases } from "./xlsxCases.js";
 
 export type Layout = Orientation | "auto";
@@ -65,6 +65,25 @@ export interface CaseStream {
   close(): Promise<void>;
   /** Where a row is, by the line `lines` gives for it: "Results!17:17" in a workbook; "line 17" where absent. */
   rowPlace?: (line: number) => string;
+}
+
+/** A case stream over one batch and the source that fills it. */
+export function caseStreamOf(
+  batch: RowBatch,
+  source: BatchSource,
+  table: { file: string; cases: LoadCase[]; map: CaseMap; idHeaders: string[]; totalBytes: number },
+  bytesRead: () => number,
+  rowPlace?: (line: number) => string,
+): CaseStream {
+  return {
+    kind: "stream",
+    ...table,
+    batches: batchesOf(batch, source),
+    rows: rowsOf(batchesOf(batch, source), table.cases.length),
+    bytesRead,
+    close: () => source.close(),
+    ...(rowPlace ? { rowPlace } : {}),
+  };
 }
 
 export interface CaseFile {
@@ -292,28 +311,19 @@ function caseStream(
       await source.refill();
     }
   };
-  const batches = (): AsyncGenerator<RowBatch> =>
-    batchesOf(batch, {
+  return caseStreamOf(
+    batch,
+    {
       fill,
       // Unless the file was cut meanwhile, which is what the "bad row" then is.
       stoppedBy: async (e) => (e instanceof CliError ? ((await source.shrinkError()) ?? e) : e),
       empty: () => new CliError(`${file}: the case table has no result rows below its header row`),
       what: "the case file",
       close: () => source.close(),
-    });
-
-  return {
-    kind: "stream",
-    file,
-    cases,
-    map: options.map,
-    idHeaders: header.cells.slice(0, idColumns).map(cellText),
-    batches: batches(),
-    rows: rowsOf(batches(), caseCount),
-    totalBytes,
-    bytesRead: () => source.bytesRead(),
-    close: () => source.close(),
-  };
+    },
+    { file, cases, map: options.map, idHeaders: header.cells.slice(0, idColumns).map(cellText), totalBytes },
+    () => source.bytesRead(),
+  );
 }
 
 const VALUE_OPTIONS = { numbersAsText: true };

@@ -27,8 +27,8 @@ import {
 } from "../../core/index.js";
 import { sheetPrefix } from "../../sheet/sheetArea.js";
 import { CliError } from "../cliError.js";
-import { lastNonBlank, leaningOrientation, problemsInFile, type CaseFile, type CaseFileOptions, type CaseInput, type CaseStream } from "./caseInput.js";
-import { BATCH_ROWS, batchesOf, emptyBatch, rowsOf, type RowBatch } from "./rowBatches.js";
+import { caseStreamOf, lastNonBlank, leaningOrientation, problemsInFile, type CaseFile, type CaseFileOptions, type CaseInput, type CaseStream } from "./caseInput.js";
+import { BATCH_ROWS, emptyBatch } from "./rowBatches.js";
 import type { CellLocator } from "./locate.js";
 import { readWorkbookIndex } from "./workbookCells.js";
 import { MAX_WORKBOOK_BYTES, WorkbookPackage, type PackageLimits } from "./workbookPackage.js";
@@ -270,31 +270,21 @@ async function sheetStream(
     }
     return true;
   };
-  const close = async (): Promise<void> => {
-    await rows.records.return(undefined);
-  };
-  const batches = (): AsyncGenerator<RowBatch> =>
-    batchesOf(batch, {
+  return caseStreamOf(
+    batch,
+    {
       fill,
       stoppedBy: (e) => Promise.resolve(e),
       empty: () => new CliError(`${file} ${at.row(0)}: the case table has no result rows below its header row`),
       what: "the worksheet",
-      close,
-    });
-
-  return {
-    kind: "stream",
-    file,
-    cases,
-    map: options.map,
-    idHeaders: header.cells.slice(0, idColumns).map(cellText),
-    batches: batches(),
-    rows: rowsOf(batches(), caseCount),
-    totalBytes: partSize,
-    bytesRead: () => rows.charactersRead(),
-    close,
-    rowPlace: (line) => at.row(line - headerRow),
-  };
+      close: async () => {
+        await rows.records.return(undefined);
+      },
+    },
+    { file, cases, map: options.map, idHeaders: header.cells.slice(0, idColumns).map(cellText), totalBytes: partSize },
+    () => rows.charactersRead(),
+    (line) => at.row(line - headerRow),
+  );
 }
 
 /** The header row's problems, worded as merged cells where a merge is their cause (known only once the sheet is read). */
