@@ -1,4 +1,5 @@
 import type { Arith, Sum } from "./ast.js";
+import { eachArithNode } from "./walk.js";
 
 /** Every value name (parameter, choice value, attribute) a combination's factors read. */
 export function valueNames(sum: Sum, out = new Set<string>()): Set<string> {
@@ -10,24 +11,7 @@ export function valueNames(sum: Sum, out = new Set<string>()): Set<string> {
 }
 
 function arithNames(a: Arith, out: Set<string>): void {
-  switch (a.kind) {
-    case "name":
-      out.add(a.name);
-      break;
-    case "negate":
-      arithNames(a.operand, out);
-      break;
-    case "binary":
-      arithNames(a.left, out);
-      arithNames(a.right, out);
-      break;
-    case "choice":
-      for (const o of a.options) arithNames(o, out);
-      break;
-    case "call":
-      for (const x of a.args) arithNames(x, out);
-      break;
-    case "number":
-      break;
-  }
+  eachArithNode(a, (n) => {
+    if (n.kind === "name") out.add(n.name);
+  });
 }

@@ -5,6 +5,7 @@
  */
 import type { Arith } from "../expression/ast.js";
 import { evaluateArith } from "../expression/evaluate.js";
+import { eachArithNode } from "../expression/walk.js";
 import { fail, ok, problem, type Result } from "../problems.js";
 import type { LoadSymbol } from "../ruleset/model.js";
 
@@ -20,26 +21,10 @@ export interface FactorScope {
 
 /** Every choice node of a factor, outermost first. */
 export function choiceNodes(a: Arith | null, out: Arith[] = []): Arith[] {
-  if (!a) return out;
-  switch (a.kind) {
-    case "choice":
-      out.push(a);
-      for (const o of a.options) choiceNodes(o, out);
-      break;
-    case "negate":
-      choiceNodes(a.operand, out);
-      break;
-    case "binary":
-      choiceNodes(a.left, out);
-      choiceNodes(a.right, out);
-      break;
-    case "call":
-      for (const x of a.args) choiceNodes(x, out);
-      break;
-    case "number":
-    case "name":
-      break;
-  }
+  if (a)
+    eachArithNode(a, (n) => {
+      if (n.kind === "choice") out.push(n);
+    });
   return out;
 }
 

@@ -5,6 +5,7 @@
  */
 import type { Arith, Sum } from "../expression/ast.js";
 import { parseExpression, type NameClassifier } from "../expression/parser.js";
+import { eachArithNode } from "../expression/walk.js";
 import { problem, type Problem } from "../problems.js";
 import type { Combination, LoadSymbol, Parameter, ValueKind } from "./model.js";
 import type { NameRegistry } from "./nameRegistry.js";
@@ -82,29 +83,13 @@ function structureProblems(sum: Sum, symbols: ReadonlyMap<string, LoadSymbol>, v
   const leadSymbols = leads[0]?.body.kind === "lead" ? leads[0].body.symbols.map((s) => s.name) : [];
 
   const attributesIn = (a: Arith | null, acc: { name: string; position: number }[] = []) => {
-    if (!a) return acc;
-    switch (a.kind) {
-      case "number":
-        break;
-      case "name":
-        if (values.get(a.name) === "attribute") acc.push({ name: a.name, position: a.span.start });
-        break;
-      case "negate":
-        attributesIn(a.operand, acc);
-        break;
-      case "binary":
-        attributesIn(a.left, acc);
-        attributesIn(a.right, acc);
-        break;
-      case "choice":
-        for (const o of a.options) attributesIn(o, acc);
-        break;
-      case "call":
-        for (const x of a.args) attributesIn(x, acc);
-        break;
-    }
+    if (a)
+      eachArithNode(a, (n) => {
+        if (n.kind === "name" && values.get(n.name) === "attribute") acc.push({ name: n.name, position: n.span.start });
+      });
     return acc;
   };
+
 
   const check = (s: Sum, enclosing: { name: string; position: number }[], topLevel: boolean) => {
     for (const term of s.terms) {
