@@ -9,10 +9,18 @@
  * what the file does not hold. Where putting it back fails as well, the session
  * keeps the new value whole, unsaved, and the error says so: the key is read
  * back to tell which value it holds (settingsBackend.ts, writeFailure).
+ *
+ * A `saveAsync` that never calls back would leave the pane waiting for ever: after
+ * `saveWaitMs` the write is given up as not confirmed, the session keeps the new
+ * value (the save may still land, so nothing is put back) and the error says so;
+ * a late answer is then ignored.
  */
 import { writeFailure, type SettingsBackend } from "../workbook/settingsBackend.js";
 
-export function officeSettingsBackend(): SettingsBackend {
+/** How long a save may take before the pane stops waiting for it. */
+export const SAVE_WAIT_MS = 30_000;
+
+export function officeSettingsBackend(saveWaitMs = SAVE_WAIT_MS): SettingsBackend {
   const settings = (): Office.Settings | null =>
     typeof Office !== "undefined" && Office.context?.document?.settings ? Office.context.document.settings : null;
   const textOf = (value: unknown): string | null => (typeof value === "string" ? value : null);
@@ -32,7 +40,16 @@ export function officeSettingsBackend(): SettingsBackend {
           return;
         }
         const before = textOf(s.get(key));
+        let settled = false;
+        let waiting: ReturnType<typeof setTimeout> | undefined;
+        const settle = (): boolean => {
+          if (settled) return false;
+          settled = true;
+          clearTimeout(waiting);
+          return true;
+        };
         const failed = (reason: unknown) => {
+          if (!settle()) return;
           try {
             if (before !== null) s.set(key, before);
             else s.remove(key);
@@ -48,9 +65,15 @@ export function officeSettingsBackend(): SettingsBackend {
           return;
         }
         try {
+          waiting = setTimeout(() => {
+            if (!settle()) return;
+            const seconds = Math.round(saveWaitMs / 1000);
+            reject(writeFailure(new Error(`the workbook has not confirmed saving its settings after ${seconds} s (it may still save them; save the workbook to be sure)`), () => textOf(s.get(key)), before, value));
+          }, saveWaitMs);
           s.saveAsync((result) => {
-            if (result.status === Office.AsyncResultStatus.Succeeded) resolve();
-            else failed(new Error(`the workbook did not save its settings: ${result.error?.message ?? "unknown reason"}`));
+            if (result.status === Office.AsyncResultStatus.Succeeded) {
+              if (settle()) resolve();
+            } else failed(new Error(`the workbook did not save its settings: ${result.error?.message ?? "unknown reason"}`));
           });
         } catch (e) {
           failed(new Error(`the workbook did not save its settings: ${e instanceof Error ? e.message : String(e)}`));
