@@ -176,8 +176,8 @@ describe("cells a CSV file holds as text are answered as there", () => {
         expect(fromXlsx).toEqual([`${name}.xlsx Results!C2 (L): "${csvText}" is not a number (a number stored as text? convert it)`]);
       } else if (csvText.startsWith("#")) {
         // A spreadsheet's error value is named as such, in a worksheet and as the text a CSV export writes of it.
-        expect(fromXlsx).toEqual([`${name}.xlsx Results!C2 (L): ${csvText} is an error value, not a number (the cell's own formula failed)`]);
-        expect(await refused(["envelope", `${name}.csv`, ...RULES, "--format", "csv"])).toEqual([`${name}.csv line 2, column C (L): ${csvText} is an error value, not a number (the cell's own formula failed)`]);
+        expect(fromXlsx).toEqual([`${name}.xlsx Results!C2 (L): ${csvText} is an error value, not a number (the formula that should have given it failed)`]);
+        expect(await refused(["envelope", `${name}.csv`, ...RULES, "--format", "csv"])).toEqual([`${name}.csv line 2, column C (L): ${csvText} is an error value, not a number (the formula that should have given it failed)`]);
       } else {
         expect(fromXlsx).toEqual([`${name}.xlsx Results!C2 (L): "${csvText}" is not a number`]);
         expect(await refused(["envelope", `${name}.csv`, ...RULES, "--format", "csv"])).toEqual([`${name}.csv line 2, column C (L): "${csvText}" is not a number`]);

@@ -56,9 +56,9 @@ describe("formulas on value cells that are not numbers", () => {
     [NaN, "NaN is not a finite number"],
     ["1e400", '"1e400" is not a number'],
     [true, "TRUE is not a number"],
-    ["#N/A", "#N/A is an error value, not a number (the cell's own formula failed)"],
+    ["#N/A", "#N/A is an error value, not a number (the formula that should have given it failed)"],
     // An error in a cell as the custom-function runtime may hand it over: an object with its code.
-    [{ code: "#DIV/0!", message: "" }, "#DIV/0! is an error value, not a number (the cell's own formula failed)"],
+    [{ code: "#DIV/0!", message: "" }, "#DIV/0! is an error value, not a number (the formula that should have given it failed)"],
   ])("refuses %s at its cell", (v, words) => {
     expect(message(evaluateFormula(ENVELOPE, [cell(v), ROWS, null, null], WHERE))).toBe(`cases, Loads!C2 (L): ${words}`);
   });

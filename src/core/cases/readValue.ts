@@ -43,7 +43,7 @@ export function readValue(
       return 0;
     }
     if (EXCEL_ERROR.test(text)) {
-      problems.push(problem("cases-not-a-number", `${text} is an error value, not a number (the cell's own formula failed)`, { ...place, header }));
+      problems.push(problem("cases-not-a-number", `${text} is an error value, not a number (the formula that should have given it failed)`, { ...place, header }));
       return 0;
     }
     const hint = /^[+-]?[\d.,]+$/.test(text) ? " (a number stored as text? convert it)" : "";

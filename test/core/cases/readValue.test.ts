@@ -96,7 +96,7 @@ describe("readValue", () => {
     "names the spreadsheet error value %s as an error value, not a number",
     (cell) => {
       // The error values as Excel shows them in a cell (Microsoft Support, "How to correct a #… error", one page per value) [memory].
-      expect(refusal(cell)).toBe(`${cell} is an error value, not a number (the cell's own formula failed)`);
+      expect(refusal(cell)).toBe(`${cell} is an error value, not a number (the formula that should have given it failed)`);
     },
   );
 
