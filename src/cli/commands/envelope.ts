@@ -1,6 +1,6 @@
 /** `loadwright envelope FILE`: per component or result row, the largest and smallest value with the row that gives each. */
 import { availableParallelism, loadavg } from "node:os";
-import { compiledPlanOf, extremesEvaluator, labelOf } from "../../core/index.js";
+import { blockExtremesEvaluator, compiledPlanOf, extremesBlock, labelOf } from "../../core/index.js";
 import { CliError } from "../cliError.js";
 import { parameterInput } from "../input/paramOption.js";
 import { csvField, jsonNumber, numberText } from "../output/cells.js";
@@ -29,20 +29,21 @@ export async function envelopeCommand(file: string, options: EnvelopeOptions, io
     if (two) return envelopeOnTwoThreads(file, input, chosen.ruleset, parameterInput(options.param), io);
   }
   const compiled = compiledPlanOf(plan);
-  const evaluator = extremesEvaluator(compiled);
+  const evaluator = blockExtremesEvaluator(compiled);
+  const width = compiled.maxTerms;
+  let found = extremesBlock(compiled, 0);
 
   // Every result row, in file order: its envelope, checked finite, with the labels of its two rows.
   async function each(write: (id: string, max: number, maxLabel: string, min: number, minLabel: string) => void | Promise<void>): Promise<boolean> {
     for await (const batch of resultBatches(input, "envelope")) {
-      const cases = batch.cases;
-      for (let n = 0; n < batch.count; n++) {
-        const e = evaluator.evaluateAt(batch.values, n * cases);
-        if (!e) throw noRowsError(plan, file);
-        const { maxValue: max, minValue: min } = e;
-        // A row without a finite value (a sum past the largest number) is refused, naming the result and the row.
-        if (!e.finite) throw notFiniteError(file, batch.place(n), batch.ids[n], labelOf(compiled, e.faultBranch, e.faultChoices));
-        await write(batch.ids[n], max, labelOf(compiled, e.maxBranch, e.maxChoices), min, labelOf(compiled, e.minBranch, e.minChoices));
+      if (found.capacity < batch.count) found = extremesBlock(compiled, batch.count);
+      const done = evaluator.evaluate(batch.values, batch.count, found, true);
+      if (done < 0) throw noRowsError(plan, file);
+      for (let n = 0; n < done; n++) {
+        await write(batch.ids[n], found.maxValue[n], labelOf(compiled, found.maxBranch[n], found.maxChoices, n * width), found.minValue[n], labelOf(compiled, found.minBranch[n], found.minChoices, n * width));
       }
+      // A row without a finite value (a sum past the largest number) is refused, naming the result and the row.
+      if (done < batch.count) throw notFiniteError(file, batch.place(done), batch.ids[done], labelOf(compiled, found.faultBranch, found.faultChoices));
       await out.maybeFlush();
       if (out.isClosed) return false;
     }
