@@ -40,7 +40,9 @@ export async function envelopeCommand(file: string, options: EnvelopeOptions, io
       const done = evaluator.evaluate(batch.values, batch.count, found, true);
       if (done < 0) throw noRowsError(plan, file);
       for (let n = 0; n < done; n++) {
-        await write(batch.ids[n], found.maxValue[n], labelOf(compiled, found.maxBranch[n], found.maxChoices, n * width), found.minValue[n], labelOf(compiled, found.minBranch[n], found.minChoices, n * width));
+        const written = write(batch.ids[n], found.maxValue[n], labelOf(compiled, found.maxBranch[n], found.maxChoices, n * width), found.minValue[n], labelOf(compiled, found.minBranch[n], found.minChoices, n * width));
+        // Awaited only where the writer waits: an await of every row would cost a turn of the event loop each.
+        if (written) await written;
       }
       // A row without a finite value (a sum past the largest number) is refused, naming the result and the row.
       if (done < batch.count) throw notFiniteError(file, batch.place(done), batch.ids[done], labelOf(compiled, found.faultBranch, found.faultChoices));

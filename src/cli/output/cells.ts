@@ -6,11 +6,15 @@ export function numberText(value: number): string {
   if (value === 0) return "0";
   const short = fourDecimalText(value);
   if (short !== null) return short;
-  // Fast path for a streamed million rows: a number whose shortest form has at most 12 characters
-  // (and no exponent) has at most 12 significant digits, which is what formatNumber would write.
+  // Rounded to 12 digits before any String(value): writing a double's shortest form is the costly part,
+  // and a factored sum (12.600000000000001) seldom has a short one.
+  const rounded = roundedText(value);
+  if (rounded !== null) return rounded;
+  // A number whose shortest form has at most 12 characters (and no exponent) has at most 12
+  // significant digits, which is what formatNumber would write.
   const plain = String(value);
   if (plain.length <= 12 && !plain.includes("e")) return plain;
-  return roundedText(value) ?? formatNumber(value);
+  return formatNumber(value);
 }
 
 /**
@@ -62,8 +66,34 @@ function roundedText(value: number): string | null {
   const fraction = scaled - whole;
   if (Math.abs(fraction - 0.5) < 1e-3) return null;
   const digits = fraction > 0.5 ? whole + 1 : whole;
-  const rounded = digits / POWERS[decimals];
-  return String(value < 0 ? -rounded : rounded);
+  return decimalText(value < 0, digits, decimals);
+}
+
+/**
+ * String(±digits / 10^decimals) for an integer 0 < digits ≤ 10^12, written from integers:
+ * that quotient is the double nearest the decimal digits × 10^−decimals, which has at most 12
+ * significant digits, and no shorter decimal is as near it (two decimals of 12 digits or fewer
+ * lie much further apart than doubles do), so its shortest form is that decimal, trailing zeros
+ * dropped, written without an exponent below 1e21 (ECMA-262 Number::toString).
+ */
+function decimalText(negative: boolean, digits: number, decimals: number): string {
+  const unit = POWERS[decimals];
+  // Exact: digits is an integer below 2^53 and the quotient is rounded by far less than 10^−decimals.
+  let whole = Math.floor(digits / unit);
+  let fraction = digits - whole * unit;
+  if (fraction < 0) {
+    whole--;
+    fraction += unit;
+  }
+  let text = negative ? `-${whole}` : String(whole);
+  if (fraction === 0) return text;
+  let places = decimals;
+  while (fraction % 10 === 0) {
+    fraction /= 10;
+    places--;
+  }
+  text += `.${String(fraction).padStart(places, "0")}`;
+  return text;
 }
 
 /** A JSON number: full precision, -0 written as 0. */
