@@ -8,6 +8,7 @@
 import { parentPort, workerData } from "node:worker_threads";
 import { blockExtremesEvaluator, compiledPlanOf, extremesBlock, labelOf, loadRuleset, planForTable, type CaseMode, type LoadCase, type ParameterInput, type RulesetFile } from "../../core/index.js";
 import { csvField, numberText } from "../output/cells.js";
+import { rowTexts } from "../output/rowTexts.js";
 
 export interface EnvelopeWorkerSetup {
   file: RulesetFile;
@@ -43,20 +44,15 @@ function start(setup: EnvelopeWorkerSetup): (block: EnvelopeBlock) => EnvelopeLi
   const evaluator = blockExtremesEvaluator(compiled);
   const width = compiled.maxTerms;
   let found = extremesBlock(compiled, 0);
-  const escaped = new Map<string, string>();
-  const field = (label: string) => {
-    let text = escaped.get(label);
-    if (text === undefined) escaped.set(label, (text = csvField(label)));
-    return text;
-  };
+  const field = rowTexts(compiled, csvField);
   return (block) => {
     if (found.capacity < block.count) found = extremesBlock(compiled, block.count);
     const done = evaluator.evaluate(block.values, block.count, found, true);
     if (done < 0) throw new Error("the plan has no rows");
     let text = "";
     for (let n = 0; n < done; n++) {
-      const maxLabel = field(labelOf(compiled, found.maxBranch[n], found.maxChoices, n * width));
-      const minLabel = field(labelOf(compiled, found.minBranch[n], found.minChoices, n * width));
+      const maxLabel = field(found.maxBranch[n], found.maxChoices, n * width, found.maxRow[n]);
+      const minLabel = field(found.minBranch[n], found.minChoices, n * width, found.minRow[n]);
       text += `${csvField(block.ids[n])},${numberText(found.maxValue[n])},${maxLabel},${numberText(found.minValue[n])},${minLabel}\n`;
     }
     if (done < block.count) return { seq: block.seq, text, stoppedAt: done, rowLabel: labelOf(compiled, found.faultBranch, found.faultChoices) };
