@@ -16,7 +16,7 @@
  * are asked for.
  */
 import { rowKey, type CompiledPlan } from "../plan/compiledPlan.js";
-import { blockPlanOf, SOURCE_CASE, SOURCE_SLOT } from "../plan/blockPlan.js";
+import { blockPlanOf, EXACT_FROM, SOURCE_CASE, SOURCE_SLOT } from "../plan/blockPlan.js";
 import { extremesEvaluator, type ExtremesEvaluator } from "./extremes.js";
 
 /** What a block's evaluation found, row n at index n (choices at n × maxTerms). Overwritten by the next block. */
@@ -101,7 +101,6 @@ export function blockExtremesEvaluator(compiled: CompiledPlan): BlockExtremesEva
     const choices = choiceSlot.length;
     const signed = signedOut.length;
     const { maxValue, minValue, maxBranch, minBranch, maxChoices, minChoices, maxRow, minRow } = out;
-    const { namedHigh, namedLow } = plan;
     const width = compiled.maxTerms;
 
     for (let n = 0, at = 0; n < count; n++, at += caseCount) {
@@ -210,19 +209,23 @@ export function blockExtremesEvaluator(compiled: CompiledPlan): BlockExtremesEva
       minBranch[n] = liveBranch[bottomAt];
       if (!rows) continue;
       // The rows named: in each term of the branch, the first option (in the plan's order) whose value is the term's.
-      maxRow[n] = nameRow(x, at, topAt, namedHigh, maxChoices, n * width);
-      minRow[n] = nameRow(x, at, bottomAt, namedLow, minChoices, n * width);
+      maxRow[n] = nameRow(x, at, topAt, 0, maxChoices, n * width);
+      minRow[n] = nameRow(x, at, bottomAt, 1, minChoices, n * width);
     }
     return count;
   }
 
+  // What naming a row reads, taken out of the plans once.
+  const { liveBranch, namedStart, namedTerm, namedAt, namedStride, namedSigned, namedHigh, namedLow, sourceKind, sourceIndex, sourceFactor, runScaled, runLength } = plan;
+  const { scaledGroup, scaledFactor, scaledSlot, groupStart, groupCase, signedStart, signedSlot, signedAt, signedNegatedAt } = plan;
+  const { branchStart, termStart, branchFirstRow, rowNumbersExact } = compiled;
+
   /**
-   * The options of live branch i's row whose value is in the slots `termSlots` gives (namedHigh or
-   * namedLow), written from chosen[from] on; its row number where row numbers are exact, else −1.
+   * The options of the row of live branch i that gives the largest (side 0) or smallest (side 1)
+   * value, written from chosen[from] on; its row number where row numbers are exact, else −1.
    */
-  function nameRow(x: Float64Array, at: number, i: number, termSlots: Int32Array, chosen: Int32Array, from: number): number {
-    const { liveBranch, namedStart, namedTerm, namedAt, namedStride, sourceKind, sourceIndex, sourceFactor } = plan;
-    const { branchStart, termStart, branchFirstRow } = compiled;
+  function nameRow(x: Float64Array, at: number, i: number, side: 0 | 1, chosen: Int32Array, from: number): number {
+    const termSlots = side === 0 ? namedHigh : namedLow;
     const v = slots;
     const branch = liveBranch[i];
     for (let j = from, end = from + branchStart[branch + 1] - branchStart[branch]; j < end; j++) chosen[j] = 0;
@@ -233,15 +236,49 @@ export function blockExtremesEvaluator(compiled: CompiledPlan): BlockExtremesEva
       const last = termStart[t + 1] - 1;
       const value = v[termSlots[k]];
       let q = first;
-      for (; q < last; q++) {
-        const kind = sourceKind[q];
-        const y = kind === SOURCE_SLOT ? v[sourceIndex[q]] : kind === SOURCE_CASE ? 0 + sourceFactor[q] * x[at + sourceIndex[q]] : 0 - v[sourceIndex[q]];
-        if (y === value) break;
+      const si = namedSigned[k];
+      if (si >= 0) {
+        // A sign-closed term: of each slot of the largest magnitude, the option or its negation, whichever has the
+        // sign asked for; the first of those in the term. (Where the magnitude is 0 every option is 0: the first.)
+        if (value !== 0) {
+          const size = side === 0 ? value : 0 - value;
+          let place = last - first + 1;
+          for (let p = signedStart[si], end = signedStart[si + 1]; p < end; p++) {
+            const y = v[signedSlot[p]];
+            if (Math.abs(y) !== size) continue;
+            const here = y > 0 === (side === 0) ? signedAt[p] : signedNegatedAt[p];
+            if (here < place) place = here;
+          }
+          q = first + place;
+        }
+      } else {
+        for (; q < last; q++) {
+          const s = runScaled[q];
+          if (s >= 0) {
+            // A run of a scaled group: none of it gives the value unless the group's extreme does.
+            const f = scaledFactor[s];
+            if (v[scaledSlot[s] + side] !== value) {
+              q = Math.min(q + runLength[q], last) - 1;
+              continue;
+            }
+            if (Math.abs(value) >= EXACT_FROM) {
+              const g = scaledGroup[s];
+              const extreme = g * 2 + ((side === 0) === f > 0 ? 0 : 1);
+              let c = groupStart[g];
+              while (x[at + groupCase[c]] !== groupExtremes[extreme]) c++;
+              q += c - groupStart[g];
+              break;
+            }
+          }
+          const kind = sourceKind[q];
+          const y = kind === SOURCE_SLOT ? v[sourceIndex[q]] : kind === SOURCE_CASE ? 0 + sourceFactor[q] * x[at + sourceIndex[q]] : 0 - v[sourceIndex[q]];
+          if (y === value) break;
+        }
       }
       chosen[from + namedAt[k]] = q - first;
       row += (q - first) * namedStride[k];
     }
-    return compiled.rowNumbersExact ? row : -1;
+    return rowNumbersExact ? row : -1;
   }
 
   /** Row n read by the compiled plan's own evaluator; false (and the fault named in `out`) where some concrete row is not finite. */

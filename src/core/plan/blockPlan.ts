@@ -18,6 +18,13 @@
  *   value, and its negation as its smallest: 0 + Σ(−f)·x is exactly 0 − (0 + Σ f·x).
  * - A term with one thing to choose from reads it where it is; branches with a
  *   term that has no option (which give no rows) are left out.
+ * - Naming a row's options takes shortcuts of the same kind: in a sign-closed
+ *   term, the option (or its negation) of the largest magnitude; in a run of a
+ *   scaled group's options in case order with a factor that is a power of two
+ *   (0.5W, 1.0W), the first case whose value is the group's extreme — the
+ *   product is then exact, so no other case value gives the same product
+ *   (checked only for values of at least 2^−1000, far from the numbers that
+ *   lose digits); a run whose extreme is not the term's value is passed over.
  *
  * What none of this covers — a value that is not a number along the way — is
  * left to the compiled plan's own evaluator, row by row.
@@ -86,7 +93,23 @@ export interface BlockPlan {
   sourceKind: Uint8Array;
   sourceIndex: Int32Array;
   sourceFactor: Float64Array;
+  /**
+   * Where term option k begins a run of the members of scaled group runScaled[k] (else −1), in the
+   * group's case order and with a factor that is a power of two: the run is runLength[k] options
+   * long, and its first option giving a value v with |v| ≥ EXACT_FROM is the first whose case value is
+   * the group's extreme (multiplying by a power of two is exact there, so only that case value gives v).
+   */
+  runScaled: Int32Array;
+  runLength: Int32Array;
+  /** Per entry k of signedSlot: the first place in its term of that option (signedAt) and of its negation (signedNegatedAt). */
+  signedAt: Int32Array;
+  signedNegatedAt: Int32Array;
+  /** Per entry of named…: the sign-closed term it is (an index into signed…), else −1. */
+  namedSigned: Int32Array;
 }
+
+/** The smallest size of a value named through a run (far from the numbers below 2^−1022, which lose digits). */
+export const EXACT_FROM = 2 ** -1000;
 
 export const SOURCE_SLOT = 0;
 export const SOURCE_CASE = 1;
@@ -133,6 +156,8 @@ export function makeBlockPlan(compiled: CompiledPlan): BlockPlan {
   const scaled: { group: number; factor: number }[] = [];
   const scaledIds = new Map<string, number>();
   const scaledSlot = (s: number) => optionCount + 2 * s;
+  // The scaled group each single-case option of a term was put in, by "term/option".
+  const memberOf = new Map<string, number>();
 
   // Per term: the slots of its largest and smallest value, once known.
   const termHigh = new Int32Array(termCount).fill(-1);
@@ -187,7 +212,10 @@ export function makeBlockPlan(compiled: CompiledPlan): BlockPlan {
         scaledIds.set(scaledKey, (s = scaled.length));
         scaled.push({ group, factor });
       }
-      for (const o of same) grouped.add(o);
+      for (const o of same) {
+        grouped.add(o);
+        memberOf.set(`${t}/${o}`, s);
+      }
       high.push(scaledSlot(s));
       low.push(scaledSlot(s) + 1);
     }
@@ -239,6 +267,35 @@ export function makeBlockPlan(compiled: CompiledPlan): BlockPlan {
       }
     }
   }
+
+  // Runs of a scaled group's members in its case order, with a factor that is a power of two.
+  const runScaled = new Int32Array(termOptions.length).fill(-1);
+  const runLength = new Int32Array(termOptions.length);
+  const powerOfTwo = (f: number) => {
+    const e = Math.round(Math.log2(Math.abs(f)));
+    return Math.abs(e) <= 8 && Math.abs(f) === 2 ** e;
+  };
+  for (let t = 0; t < termCount; t++) {
+    for (let k = termStart[t]; k < termStart[t + 1]; k++) {
+      const s = memberOf.get(`${t}/${termOptions[k]}`);
+      if (s === undefined || !powerOfTwo(scaled[s].factor)) continue;
+      const cases = groups[scaled[s].group];
+      if (k + cases.length > termStart[t + 1]) continue;
+      let run = true;
+      for (let j = 0; j < cases.length && run; j++) {
+        const o = termOptions[k + j];
+        run = memberOf.get(`${t}/${o}`) === s && optionCase[optionStart[o]] === cases[j];
+      }
+      if (!run) continue;
+      runScaled[k] = s;
+      runLength[k] = cases.length;
+      k += cases.length - 1;
+    }
+  }
+  const placeIn = (term: number, o: number) => Array.prototype.indexOf.call(termOptions.subarray(termStart[term], termStart[term + 1]), o);
+  const signedAt = Int32Array.from(signedTerms.flatMap(({ term, slots }) => slots.map((o) => placeIn(term, o))));
+  const signedNegatedAt = Int32Array.from(signedTerms.flatMap(({ term, slots }) => slots.map((o) => placeIn(term, negation[o]))));
+  const signedOf = new Map(signedTerms.map(({ term }, i) => [term, i]));
 
   const singles: number[] = [];
   const pairs: number[] = [];
@@ -306,10 +363,15 @@ export function makeBlockPlan(compiled: CompiledPlan): BlockPlan {
     namedHigh: Int32Array.from(named, (x) => x.high),
     namedLow: Int32Array.from(named, (x) => x.low),
     namedStride: Float64Array.from(named, (x) => x.stride),
+    namedSigned: Int32Array.from(named, (x) => signedOf.get(x.term) ?? -1),
     slotCount,
     sourceKind,
     sourceIndex,
     sourceFactor,
+    runScaled,
+    runLength,
+    signedAt,
+    signedNegatedAt,
   };
 }
 

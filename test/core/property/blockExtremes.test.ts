@@ -116,9 +116,25 @@ describe("the block evaluator", () => {
     expect(block.groupCount).toBe(2); // the eight directions, and Lr, S, R
     expect(block.scaledFactor.length).toBe(3); // wind at 0.5 and at 1, Lr/S/R at 0.5
     expect(block.signedOut.length).toBe(1); // the orthogonal term
+    expect(Array.from(block.runScaled).filter((s) => s >= 0).length).toBe(3); // each wind term's directions, and Lr, S, R, in case order
     const values = Array.from({ length: 64 * 16 }, (_, k) => ((k * 7919) % 41) - 20);
     expectSameAsGeneral(compiled, Float64Array.from(values), 64);
   });
+});
+
+test("names rows of a term of directions each followed by its negation (W both ways) as the term-by-term reading does", () => {
+  // 10 cases: G, Q, W1–W8; factors invented, shaped like a list with wind taken both ways.
+  const both = (f: number) => [2, 3, 4, 5, 6, 7, 8, 9].flatMap((c) => [option([c, f]), option([c, -f])]);
+  const plan = planOf(10, [
+    [[[option([0, 1.35])], [option([1, 1.5]), option()], [...both(0.9), option()]]],
+    [[[option([0, 1])], [...both(1.5), option()], [option([1, 1.05]), option()]]],
+  ]);
+  const compiled = compilePlan(plan);
+  const block = makeBlockPlan(compiled);
+  expect(block.signedOut.length).toBe(2);
+  // Directions that tie in size with either sign, and rows of zeros.
+  const values = Array.from({ length: 80 * 10 }, (_, k) => (k % 170 < 10 ? 0 : (((k * 7919) % 9) - 4) * (k % 3 === 0 ? -1 : 1)));
+  expectSameAsGeneral(compiled, Float64Array.from(values), 80);
 });
 
 function option(...factors: [number, number][]): TermOption {
@@ -144,7 +160,7 @@ function planOf(caseCount: number, combinations: TermOption[][][][]): Plan {
 /** Factors and values chosen to collide: equal products, exact negations, zeros of both signs, overflow, NaN. */
 const FACTORS = [1, -1, 0.5, -0.5, 1.6, 0.3, 0.1, 0, -0, 1e308, 2, 3];
 const TYING = [0, -0, 1, -1, 2, 0.1, 0.2, 0.3, -0.3, 3];
-const EXTREME = [1e308, -1e308, Infinity, -Infinity, NaN, 5e-324];
+const EXTREME = [1e308, -1e308, Infinity, -Infinity, NaN, 5e-324, 2 ** -1000, -(2 ** -1001), 2 ** -1022];
 const value = fc.oneof({ weight: 12, arbitrary: fc.constantFrom(...TYING) }, { weight: 1, arbitrary: fc.constantFrom(...EXTREME) });
 
 const writtenPlan = fc.integer({ min: 1, max: 6 }).chain((caseCount) => {
@@ -155,7 +171,14 @@ const writtenPlan = fc.integer({ min: 1, max: 6 }).chain((caseCount) => {
     fc.array(fc.tuple(plain, fc.boolean()), { minLength: 0, maxLength: 5 }).map((list) => list.flatMap(([c, withNegation]) => (withNegation ? [c, c.map(([k, f]): [number, number] => [k, -f])] : [c]))),
     fc
       .tuple(
-        fc.array(fc.tuple(fc.constantFrom(...FACTORS), fc.shuffledSubarray(Array.from({ length: caseCount }, (_, k) => k), { minLength: 1 })), { minLength: 1, maxLength: 2 }),
+        fc.array(
+          fc.tuple(
+            fc.constantFrom(...FACTORS),
+            // In case order (as a run the block layout names in one step) or in any order.
+            fc.oneof(fc.subarray(Array.from({ length: caseCount }, (_, k) => k), { minLength: 1 }), fc.shuffledSubarray(Array.from({ length: caseCount }, (_, k) => k), { minLength: 1 })),
+          ),
+          { minLength: 1, maxLength: 2 },
+        ),
         fc.array(plain, { maxLength: 2 }),
         fc.boolean(),
       )
