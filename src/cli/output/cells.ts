@@ -33,13 +33,22 @@ function fourDecimalText(value: number): string | null {
   if (scaled / 1e4 !== size) return null;
   const whole = Math.floor(scaled / 1e4);
   const fraction = scaled - whole * 1e4;
-  let text = String(whole);
-  if (fraction !== 0) {
-    let digits = String(fraction).padStart(4, "0");
-    while (digits.endsWith("0")) digits = digits.slice(0, -1);
-    text += `.${digits}`;
-  }
+  const text = fraction === 0 ? String(whole) : `${whole}.${fractionText(fraction, 4)}`;
   return value < 0 ? `-${text}` : text;
+}
+
+/** Runs of zeros, by length: the zeros a fraction's digits follow. */
+const ZEROS = Array.from({ length: 12 }, (_, n) => "0".repeat(n));
+
+/** The digits after the point of an integer 0 < fraction < 10^places read as fraction / 10^places: leading zeros kept, trailing ones dropped. */
+function fractionText(fraction: number, places: number): string {
+  // Math.floor(f / 10) × 10 === f exactly where 10 divides f (f below 2^53); `%` on a double costs a call.
+  for (let tenth = Math.floor(fraction / 10); tenth * 10 === fraction; tenth = Math.floor(fraction / 10)) {
+    fraction = tenth;
+    places--;
+  }
+  const digits = String(fraction);
+  return ZEROS[places - digits.length] + digits;
 }
 
 /** Powers of ten, every one a double exactly. */
@@ -85,15 +94,8 @@ function decimalText(negative: boolean, digits: number, decimals: number): strin
     whole--;
     fraction += unit;
   }
-  let text = negative ? `-${whole}` : String(whole);
-  if (fraction === 0) return text;
-  let places = decimals;
-  while (fraction % 10 === 0) {
-    fraction /= 10;
-    places--;
-  }
-  text += `.${String(fraction).padStart(places, "0")}`;
-  return text;
+  const text = fraction === 0 ? String(whole) : `${whole}.${fractionText(fraction, decimals)}`;
+  return negative ? `-${text}` : text;
 }
 
 /** A JSON number: full precision, -0 written as 0. */
