@@ -69,6 +69,7 @@ export { envelope, envelopeOf, type EnvelopeEntry, type EnvelopeValue } from "./
 export { notFiniteProblem, type ComponentPlace } from "./evaluate/notFinite.js";
 export { extremes, extremesEvaluator, type Extreme, type Extremes, type ExtremesEvaluator, type RowExtremes } from "./evaluate/extremes.js";
 export { compiledPlanOf, type CompiledPlan } from "./plan/compiledPlan.js";
+export { blockExtremesEvaluator, extremesBlock, type BlockExtremesEvaluator, type ExtremesBlock } from "./evaluate/blockExtremes.js";
 export { governing, defaultCriteria, type GoverningRow, type GoverningOptions } from "./evaluate/governing.js";
 export { parseCriterion, criterionNames, type Criterion } from "./evaluate/criteria.js";
 export type { Arith } from "./expression/ast.js";

@@ -1,10 +1,11 @@
 /** `loadwright envelope FILE`: per component or result row, the largest and smallest value with the row that gives each. */
 import { availableParallelism, loadavg } from "node:os";
-import { compiledPlanOf, extremesEvaluator, labelOf } from "../../core/index.js";
+import { blockExtremesEvaluator, compiledPlanOf, extremesBlock, labelOf } from "../../core/index.js";
 import { CliError } from "../cliError.js";
 import { parameterInput } from "../input/paramOption.js";
 import { csvField, jsonNumber, numberText } from "../output/cells.js";
 import { streamedJsonStart } from "../output/preamble.js";
+import { rowTexts } from "../output/rowTexts.js";
 import { rowWriter } from "../output/rowWriter.js";
 import { notFiniteError, noRowsError, prepare, writePreamble, type CaseOptions, type Io } from "./common.js";
 import { envelopeOnTwoThreads } from "./envelopeThreads.js";
@@ -29,20 +30,26 @@ export async function envelopeCommand(file: string, options: EnvelopeOptions, io
     if (two) return envelopeOnTwoThreads(file, input, chosen.ruleset, parameterInput(options.param), io);
   }
   const compiled = compiledPlanOf(plan);
-  const evaluator = extremesEvaluator(compiled);
+  const evaluator = blockExtremesEvaluator(compiled);
+  const width = compiled.maxTerms;
+  let found = extremesBlock(compiled, 0);
 
-  // Every result row, in file order: its envelope, checked finite, with the labels of its two rows.
-  async function each(write: (id: string, max: number, maxLabel: string, min: number, minLabel: string) => void | Promise<void>): Promise<boolean> {
+  // Every result row, in file order: its envelope, checked finite, with the labels of its two rows (as `escape` writes them).
+  async function each(write: (id: string, max: number, maxLabel: string, min: number, minLabel: string) => void | Promise<void>, escape = (label: string) => label): Promise<boolean> {
+    const rowText = rowTexts(compiled, escape);
     for await (const batch of resultBatches(input, "envelope")) {
-      const cases = batch.cases;
-      for (let n = 0; n < batch.count; n++) {
-        const e = evaluator.evaluateAt(batch.values, n * cases);
-        if (!e) throw noRowsError(plan, file);
-        const { maxValue: max, minValue: min } = e;
-        // A row without a finite value (a sum past the largest number) is refused, naming the result and the row.
-        if (!e.finite) throw notFiniteError(file, batch.place(n), batch.ids[n], labelOf(compiled, e.faultBranch, e.faultChoices));
-        await write(batch.ids[n], max, labelOf(compiled, e.maxBranch, e.maxChoices), min, labelOf(compiled, e.minBranch, e.minChoices));
+      if (found.capacity < batch.count) found = extremesBlock(compiled, batch.count);
+      const done = evaluator.evaluate(batch.values, batch.count, found, true);
+      if (done < 0) throw noRowsError(plan, file);
+      for (let n = 0; n < done; n++) {
+        const maxLabel = rowText(found.maxBranch[n], found.maxChoices, n * width, found.maxRow[n]);
+        const minLabel = rowText(found.minBranch[n], found.minChoices, n * width, found.minRow[n]);
+        const written = write(batch.ids[n], found.maxValue[n], maxLabel, found.minValue[n], minLabel);
+        // Awaited only where the writer waits: an await of every row would cost a turn of the event loop each.
+        if (written) await written;
       }
+      // A row without a finite value (a sum past the largest number) is refused, naming the result and the row.
+      if (done < batch.count) throw notFiniteError(file, batch.place(done), batch.ids[done], labelOf(compiled, found.faultBranch, found.faultChoices));
       await out.maybeFlush();
       if (out.isClosed) return false;
     }
@@ -66,15 +73,9 @@ export async function envelopeCommand(file: string, options: EnvelopeOptions, io
   if (format === "csv") {
     // The hot path of a large export: a few labels, written again and again, escaped once each.
     out.line("result,max,max row,min,min row");
-    const escaped = new Map<string, string>();
-    const field = (label: string) => {
-      let text = escaped.get(label);
-      if (text === undefined) escaped.set(label, (text = csvField(label)));
-      return text;
-    };
     const done = await each((id, max, maxRow, min, minRow) => {
-      out.line(`${csvField(id)},${numberText(max)},${field(maxRow)},${numberText(min)},${field(minRow)}`);
-    });
+      out.line(`${csvField(id)},${numberText(max)},${maxRow},${numberText(min)},${minRow}`);
+    }, csvField);
     if (done) await out.flush();
     return;
   }

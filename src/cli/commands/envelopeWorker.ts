@@ -6,8 +6,9 @@
  * lines are the ones the main thread would have written.
  */
 import { parentPort, workerData } from "node:worker_threads";
-import { compiledPlanOf, extremesEvaluator, labelOf, loadRuleset, planForTable, type CaseMode, type LoadCase, type ParameterInput, type RulesetFile } from "../../core/index.js";
+import { blockExtremesEvaluator, compiledPlanOf, extremesBlock, labelOf, loadRuleset, planForTable, type CaseMode, type LoadCase, type ParameterInput, type RulesetFile } from "../../core/index.js";
 import { csvField, numberText } from "../output/cells.js";
+import { rowTexts } from "../output/rowTexts.js";
 
 export interface EnvelopeWorkerSetup {
   file: RulesetFile;
@@ -40,23 +41,21 @@ function start(setup: EnvelopeWorkerSetup): (block: EnvelopeBlock) => EnvelopeLi
   const plan = planForTable(ruleset.value, setup.parameters, { orientation: "columns", cases: setup.cases, components: [], values: [], map });
   if (!plan.ok) throw new Error("the plan the main thread made does not plan here");
   const compiled = compiledPlanOf(plan.value);
-  const evaluator = extremesEvaluator(compiled);
-  const cases = setup.cases.length;
-  const escaped = new Map<string, string>();
-  const field = (label: string) => {
-    let text = escaped.get(label);
-    if (text === undefined) escaped.set(label, (text = csvField(label)));
-    return text;
-  };
+  const evaluator = blockExtremesEvaluator(compiled);
+  const width = compiled.maxTerms;
+  let found = extremesBlock(compiled, 0);
+  const field = rowTexts(compiled, csvField);
   return (block) => {
+    if (found.capacity < block.count) found = extremesBlock(compiled, block.count);
+    const done = evaluator.evaluate(block.values, block.count, found, true);
+    if (done < 0) throw new Error("the plan has no rows");
     let text = "";
-    for (let n = 0; n < block.count; n++) {
-      const e = evaluator.evaluateAt(block.values, n * cases);
-      if (!e) throw new Error("the plan has no rows");
-      const { maxValue: max, minValue: min } = e;
-      if (!e.finite) return { seq: block.seq, text, stoppedAt: n, rowLabel: labelOf(compiled, e.faultBranch, e.faultChoices) };
-      text += `${csvField(block.ids[n])},${numberText(max)},${field(labelOf(compiled, e.maxBranch, e.maxChoices))},${numberText(min)},${field(labelOf(compiled, e.minBranch, e.minChoices))}\n`;
+    for (let n = 0; n < done; n++) {
+      const maxLabel = field(found.maxBranch[n], found.maxChoices, n * width, found.maxRow[n]);
+      const minLabel = field(found.minBranch[n], found.minChoices, n * width, found.minRow[n]);
+      text += `${csvField(block.ids[n])},${numberText(found.maxValue[n])},${maxLabel},${numberText(found.minValue[n])},${minLabel}\n`;
     }
+    if (done < block.count) return { seq: block.seq, text, stoppedAt: done, rowLabel: labelOf(compiled, found.faultBranch, found.faultChoices) };
     return { seq: block.seq, text, stoppedAt: -1, rowLabel: "" };
   };
 }

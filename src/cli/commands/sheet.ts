@@ -12,7 +12,6 @@ import { reviewerSheet } from "../../sheet/reviewerSheet.js";
 import { noRowsError, prepare, rowLimitOf, withRowLimitHint, type CaseOptions, type Io } from "./common.js";
 import { wholeTable } from "./factored.js";
 import { criteriaOrFail } from "./governing.js";
-import { sheetWorkbook } from "./sheetWorkbook.js";
 
 export interface SheetCommandOptions extends CaseOptions {
   criterion: string[];
@@ -38,6 +37,8 @@ export async function sheetCommand(file: string, options: SheetCommandOptions, i
     ...(criteria ? { criteria } : {}),
   });
   if (!sheet.ok) throw new CliError(`${file}: ${sheet.problems.map(withRowLimitHint).join("; ")}`);
+  // Loaded here, not with the command line: the spreadsheet library takes longer to load than most commands take to run.
+  const { sheetWorkbook } = await import("./sheetWorkbook.js");
   const bytes = await sheetWorkbook(sheet.value);
   try {
     writeFileSync(out, bytes);

@@ -6,11 +6,15 @@ export function numberText(value: number): string {
   if (value === 0) return "0";
   const short = fourDecimalText(value);
   if (short !== null) return short;
-  // Fast path for a streamed million rows: a number whose shortest form has at most 12 characters
-  // (and no exponent) has at most 12 significant digits, which is what formatNumber would write.
+  // Rounded to 12 digits before any String(value): writing a double's shortest form is the costly part,
+  // and a factored sum (12.600000000000001) seldom has a short one.
+  const rounded = roundedText(value);
+  if (rounded !== null) return rounded;
+  // A number whose shortest form has at most 12 characters (and no exponent) has at most 12
+  // significant digits, which is what formatNumber would write.
   const plain = String(value);
   if (plain.length <= 12 && !plain.includes("e")) return plain;
-  return roundedText(value) ?? formatNumber(value);
+  return formatNumber(value);
 }
 
 /**
@@ -29,13 +33,22 @@ function fourDecimalText(value: number): string | null {
   if (scaled / 1e4 !== size) return null;
   const whole = Math.floor(scaled / 1e4);
   const fraction = scaled - whole * 1e4;
-  let text = String(whole);
-  if (fraction !== 0) {
-    let digits = String(fraction).padStart(4, "0");
-    while (digits.endsWith("0")) digits = digits.slice(0, -1);
-    text += `.${digits}`;
-  }
+  const text = fraction === 0 ? String(whole) : `${whole}.${fractionText(fraction, 4)}`;
   return value < 0 ? `-${text}` : text;
+}
+
+/** Runs of zeros, by length: the zeros a fraction's digits follow. */
+const ZEROS = Array.from({ length: 12 }, (_, n) => "0".repeat(n));
+
+/** The digits after the point of an integer 0 < fraction < 10^places read as fraction / 10^places: leading zeros kept, trailing ones dropped. */
+function fractionText(fraction: number, places: number): string {
+  // Math.floor(f / 10) × 10 === f exactly where 10 divides f (f below 2^53); `%` on a double costs a call.
+  for (let tenth = Math.floor(fraction / 10); tenth * 10 === fraction; tenth = Math.floor(fraction / 10)) {
+    fraction = tenth;
+    places--;
+  }
+  const digits = String(fraction);
+  return ZEROS[places - digits.length] + digits;
 }
 
 /** Powers of ten, every one a double exactly. */
@@ -62,8 +75,27 @@ function roundedText(value: number): string | null {
   const fraction = scaled - whole;
   if (Math.abs(fraction - 0.5) < 1e-3) return null;
   const digits = fraction > 0.5 ? whole + 1 : whole;
-  const rounded = digits / POWERS[decimals];
-  return String(value < 0 ? -rounded : rounded);
+  return decimalText(value < 0, digits, decimals);
+}
+
+/**
+ * String(±digits / 10^decimals) for an integer 0 < digits ≤ 10^12, written from integers:
+ * that quotient is the double nearest the decimal digits × 10^−decimals, which has at most 12
+ * significant digits, and no shorter decimal is as near it (two decimals of 12 digits or fewer
+ * lie much further apart than doubles do), so its shortest form is that decimal, trailing zeros
+ * dropped, written without an exponent below 1e21 (ECMA-262 Number::toString).
+ */
+function decimalText(negative: boolean, digits: number, decimals: number): string {
+  const unit = POWERS[decimals];
+  // Exact: digits is an integer below 2^53 and the quotient is rounded by far less than 10^−decimals.
+  let whole = Math.floor(digits / unit);
+  let fraction = digits - whole * unit;
+  if (fraction < 0) {
+    whole--;
+    fraction += unit;
+  }
+  const text = fraction === 0 ? String(whole) : `${whole}.${fractionText(fraction, decimals)}`;
+  return negative ? `-${text}` : text;
 }
 
 /** A JSON number: full precision, -0 written as 0. */

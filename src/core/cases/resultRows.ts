@@ -13,6 +13,7 @@
 import { cellText, isBlank, type Cell } from "../cells.js";
 import { fail, ok, problem, type Problem, type Result } from "../problems.js";
 import type { LoadCase } from "./caseHeaders.js";
+import { idTable } from "./idTable.js";
 import { readValue } from "./readValue.js";
 
 export interface ResultRow {
@@ -49,7 +50,7 @@ export interface ResultRowReader {
 export function resultRowReader(cases: readonly LoadCase[], options: ResultRowOptions = {}): ResultRowReader {
   const idColumns = options.idColumns ?? 1;
   const valueOptions = { numbersAsText: options.numbersAsText ?? false };
-  const firstRowOf = new Map<string, number>();
+  const firstRowOf = idTable();
 
   const idOf = (idCells: readonly Cell[], row: number): string => {
     let id = "";
@@ -62,11 +63,8 @@ export function resultRowReader(cases: readonly LoadCase[], options: ResultRowOp
 
   // A criterion or an explanation names a result by its id: two rows with one id would be ambiguous.
   const claim = (id: string, row: number): Problem | null => {
-    const first = firstRowOf.get(id);
-    if (first === undefined) {
-      firstRowOf.set(id, row);
-      return null;
-    }
+    const first = firstRowOf.claim(id, row);
+    if (first < 0) return null;
     return problem("cases-duplicate-header", `result "${id}" appears twice`, { row, column: 0, header: id, also: { row: first, column: 0 } });
   };
 

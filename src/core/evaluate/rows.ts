@@ -73,13 +73,13 @@ export function rowLabel(plan: Plan, ref: RowRef): string {
   return labelOf(compiled, flatBranch(compiled, ref), ref.choices);
 }
 
-/** The label of flat branch `branch` with one option per term, from the plan's label cache. */
-export function labelOf(compiled: CompiledPlan, branch: number, choices: ArrayLike<number>): string {
-  const key = rowKey(compiled, branch, choices);
+/** The label of flat branch `branch` with one option per term (choices[from] on), from the plan's label cache. */
+export function labelOf(compiled: CompiledPlan, branch: number, choices: Int32Array | readonly number[], from = 0): string {
+  const key = rowKey(compiled, branch, choices, from);
   let label = compiled.labels.get(key);
   if (label === undefined) {
     if (compiled.labels.size >= LABEL_CACHE_LIMIT) compiled.labels.clear();
-    label = composeLabel(compiled.plan, rowRefOf(compiled, branch, choices));
+    label = composeLabel(compiled.plan, rowRefOf(compiled, branch, from === 0 ? choices : choices.slice(from)));
     compiled.labels.set(key, label);
   }
   return label;

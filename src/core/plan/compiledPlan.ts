@@ -166,16 +166,16 @@ export function flatBranch(c: CompiledPlan, ref: RowRef): number {
   return c.combinationBranch[ref.combination] + ref.branch;
 }
 
-/** A key naming one row: its row number where exact, else the branch and choices written out. */
-export function rowKey(c: CompiledPlan, branch: number, choices: ArrayLike<number>): number | string {
+/** A key naming one row: its row number where exact, else the branch and choices written out. Choices from `from` on. */
+export function rowKey(c: CompiledPlan, branch: number, choices: ArrayLike<number>, from = 0): number | string {
   const first = c.branchStart[branch];
   const terms = c.branchStart[branch + 1] - first;
   if (c.rowNumbersExact) {
     let row = c.branchFirstRow[branch];
-    for (let t = 0; t < terms; t++) row += choices[t] * c.termStride[first + t];
+    for (let t = 0; t < terms; t++) row += choices[from + t] * c.termStride[first + t];
     return row;
   }
   let key = `${branch}/`;
-  for (let t = 0; t < terms; t++) key += `${t > 0 ? "," : ""}${choices[t]}`;
+  for (let t = 0; t < terms; t++) key += `${t > 0 ? "," : ""}${choices[from + t]}`;
   return key;
 }
