@@ -67,8 +67,12 @@ export async function parserTimes(file: string, cases: number): Promise<ParserTi
         header = false;
         continue;
       }
-      const { buf, fieldStart, fieldEnd } = source.scanner;
-      for (let k = 1; k <= cases; k++) sum += decimalAt(buf, fieldStart[k], fieldEnd[k]);
+      // As the command line reads them: the number found with the field, else decimalAt.
+      const { buf, fieldStart, fieldEnd, fieldValue } = source.scanner;
+      for (let k = 1; k <= cases; k++) {
+        const v = fieldValue[k];
+        sum += v === v ? v : decimalAt(buf, fieldStart[k], fieldEnd[k]);
+      }
     }
     return sum;
   });

@@ -19,7 +19,7 @@ import { EMPTY_CASE_MAP, findShippedRuleset, type Ruleset } from "../../src/core
 import { CliError } from "../../src/cli/cliError.js";
 import { openCases, type CaseFileOptions } from "../../src/cli/input/caseInput.js";
 import { readCsv } from "../../src/cli/input/csvRecords.js";
-import { decimalAt } from "../../src/cli/input/csvScanner.js";
+import { decimalAt, PLAIN } from "../../src/cli/input/csvScanner.js";
 import { CsvSource } from "../../src/cli/input/csvSource.js";
 
 let dir: string;
@@ -179,6 +179,50 @@ describe("numbers read from bytes", () => {
         else expect(Number.isNaN(v)).toBe(true);
       }),
       { numRuns: 20000, seed: 4103 },
+    );
+  });
+});
+
+describe("numbers read while the fields are found", () => {
+  test("are decimalAt's numbers exactly, wherever the reads split the file, and NaN only where a field needs the general reading", async () => {
+    // A plain field of a sign, up to 15 digits and a point, and no exponent: one division of exact doubles reads it, so the scanner must have.
+    const short = /^[+-]?(?=\.?\d)\d*(\.\d*)?$/;
+    await fc.assert(
+      fc.asyncProperty(fc.oneof(exportFile, hostileFile), fc.integer({ min: 1, max: 17 }), async (bytes, chunk) => {
+        const path = join(dir, `n${fileCount++}.csv`);
+        writeFileSync(path, bytes);
+        const source = await CsvSource.open(path, ",", "bytes", chunk);
+        try {
+          for (;;) {
+            const step = source.next();
+            if (step === "end") break;
+            if (step === "wait") {
+              await source.refill();
+              continue;
+            }
+            if (!source.fromBytes) continue;
+            const s = source.scanner;
+            for (let k = 0; k < s.fieldCount; k++) {
+              const read = s.fieldValue[k];
+              const text = s.buf.subarray(s.fieldStart[k], s.fieldEnd[k]);
+              const plain = s.fieldKind[k] === PLAIN;
+              if (!Number.isNaN(read)) {
+                expect(plain).toBe(true);
+                expect(bits(read)).toBe(bits(decimalAt(s.buf, s.fieldStart[k], s.fieldEnd[k])));
+              } else if (plain) {
+                const latin1 = Buffer.from(text).toString("latin1");
+                const digits = latin1.replace(/\D/g, "").length;
+                if (short.test(latin1) && digits <= 15) expect.fail(`"${latin1}" was not read`);
+              }
+            }
+          }
+        } catch (e) {
+          if (!(e instanceof CliError)) throw e;
+        } finally {
+          await source.close();
+        }
+      }),
+      { numRuns: 300, seed: 4105 },
     );
   });
 });

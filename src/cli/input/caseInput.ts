@@ -268,7 +268,9 @@ function caseStream(
     lines.note(row, line);
     const scanner = source.scanner;
     const fields = scanner.fieldCount;
-    if (allBlank(source)) return;
+    const numbers = scanner.fieldValue;
+    // A number in the first value field (read by the scanner) is no blank; otherwise every field is looked at.
+    if (!(fields > idColumns && numbers[idColumns] === numbers[idColumns]) && allBlank(source)) return;
     if (fields !== width) throw widthError(file, fields, line, header);
     const idCells: string[] = [];
     for (let c = 0; c < idColumns; c++) idCells.push(source.text(c));
@@ -278,13 +280,18 @@ function caseStream(
     if (repeated) problems.push(repeated);
     const n = batch.count;
     const base = n * caseCount;
+    const values = batch.values;
     const { buf, fieldStart, fieldEnd } = scanner;
     for (let k = 0; k < caseCount; k++) {
       const c = k + idColumns;
-      let v = decimalAt(buf, fieldStart[c], fieldEnd[c]);
-      // Not a plain decimal (NaN), or one beyond the largest double ("1e400" is Infinity): the core reads the text, and refuses the latter.
-      if (v - v !== 0) v = readValue(source.text(c), { row, column: c }, cases[k].header, VALUE_OPTIONS, problems);
-      batch.values[base + k] = v;
+      let v = numbers[c];
+      if (v !== v) {
+        // Not read on the way (quoted, long, text or blank): read from the bytes where it is a decimal number at all.
+        v = decimalAt(buf, fieldStart[c], fieldEnd[c]);
+        // Not a plain decimal (NaN), or one beyond the largest double ("1e400" is Infinity): the core reads the text, and refuses the latter.
+        if (v - v !== 0) v = readValue(source.text(c), { row, column: c }, cases[k].header, VALUE_OPTIONS, problems);
+      }
+      values[base + k] = v;
     }
     for (let c = named; c < width; c++) if (!fieldBlank(source, c)) throw refuseUnnamed(c, line);
     if (problems.length > 0) throw problemsInFile(file, problems, at);

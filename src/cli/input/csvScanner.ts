@@ -41,14 +41,24 @@ export class CsvScanner {
   fieldStart = new Int32Array(64);
   fieldEnd = new Int32Array(64);
   fieldKind = new Uint8Array(64);
+  /**
+   * Field k's number where it is a plain decimal that one multiplication or
+   * division of exact doubles reads (what decimalAt reads without Number()),
+   * read while the field is found; NaN otherwise (quoted, text, blank, or a
+   * number that needs decimalAt). An export's values are read in one pass.
+   */
+  fieldValue = new Float64Array(64);
   /** Line feeds inside the record's fields (the file lines it spans beyond its first). */
   innerLineFeeds = 0;
 
   /** The record delimiter once found: "\r\n", "\n" or "\r" as byte values, or empty before the first line break. */
   private delimiterBytes: number[] = [];
   private readonly special = new Uint8Array(256);
+  /** Numbers are read on the way unless the delimiter could be part of one ("1e5" with "e" as delimiter). */
+  private readonly readsNumbers: boolean;
 
   constructor(readonly delimiter: number) {
+    this.readsNumbers = !NUMBER_BYTES.includes(delimiter);
     this.special[delimiter] = 1;
     this.special[QUOTE] = 1;
     this.special[CR] = 1;
@@ -101,6 +111,7 @@ export class CsvScanner {
           this.fieldStart[fields] = p + 1;
           this.fieldEnd[fields] = close;
           this.fieldKind[fields] = kind;
+          this.fieldValue[fields] = NaN;
           fields++;
           p = close + 1;
           break;
@@ -118,6 +129,54 @@ export class CsvScanner {
       }
       // Plain: up to a delimiter or the record delimiter; a lone CR or LF that is not the record delimiter is content.
       const start = p;
+      let value = NaN;
+      let numberEnd = -1;
+      if (this.readsNumbers) {
+        // Sign, digits, point, digits, exponent: none of them a special byte, so the field goes on from where the number stops.
+        let c = p < end ? buf[p] : 0;
+        const negative = c === 0x2d;
+        if (negative || c === 0x2b) c = ++p < end ? buf[p] : 0;
+        let mantissa = 0;
+        let digits = 0;
+        let fraction = 0;
+        while (c >= 0x30 && c <= 0x39) {
+          mantissa = mantissa * 10 + (c - 0x30);
+          digits++;
+          c = ++p < end ? buf[p] : 0;
+        }
+        if (c === 0x2e) {
+          c = ++p < end ? buf[p] : 0;
+          while (c >= 0x30 && c <= 0x39) {
+            mantissa = mantissa * 10 + (c - 0x30);
+            digits++;
+            fraction++;
+            c = ++p < end ? buf[p] : 0;
+          }
+        }
+        let exponent = 0;
+        let exponentDigits = 1;
+        if (c === 0x65 || c === 0x45) {
+          c = ++p < end ? buf[p] : 0;
+          let negativeExponent = false;
+          if (c === 0x2d || c === 0x2b) {
+            negativeExponent = c === 0x2d;
+            c = ++p < end ? buf[p] : 0;
+          }
+          exponentDigits = 0;
+          while (c >= 0x30 && c <= 0x39) {
+            if (exponent < 1e6) exponent = exponent * 10 + (c - 0x30);
+            exponentDigits++;
+            c = ++p < end ? buf[p] : 0;
+          }
+          if (negativeExponent) exponent = -exponent;
+        }
+        const scale = exponent - fraction;
+        if (digits > 0 && exponentDigits > 0 && mantissa < TWO_53 && scale >= -22 && scale <= 22) {
+          const v = scale >= 0 ? mantissa * POW10[scale] : mantissa / POW10[-scale];
+          value = negative ? -v : v;
+          numberEnd = p;
+        }
+      }
       for (;;) {
         while (p < end && special[buf[p]] === 0) p++;
         if (p === end) {
@@ -125,6 +184,7 @@ export class CsvScanner {
           this.fieldStart[fields] = start;
           this.fieldEnd[fields] = p;
           this.fieldKind[fields] = PLAIN;
+          this.fieldValue[fields] = p === numberEnd ? value : NaN;
           fields++;
           return this.finish(fields, lineFeeds, p);
         }
@@ -133,6 +193,7 @@ export class CsvScanner {
           this.fieldStart[fields] = start;
           this.fieldEnd[fields] = p;
           this.fieldKind[fields] = PLAIN;
+          this.fieldValue[fields] = p === numberEnd ? value : NaN;
           fields++;
           p++;
           break;
@@ -144,6 +205,7 @@ export class CsvScanner {
           this.fieldStart[fields] = start;
           this.fieldEnd[fields] = p;
           this.fieldKind[fields] = PLAIN;
+          this.fieldValue[fields] = p === numberEnd ? value : NaN;
           fields++;
           return this.finish(fields, lineFeeds, p + length);
         }
@@ -190,14 +252,20 @@ export class CsvScanner {
     const start = new Int32Array(n);
     const end = new Int32Array(n);
     const kind = new Uint8Array(n);
+    const value = new Float64Array(n);
     start.set(this.fieldStart);
     end.set(this.fieldEnd);
     kind.set(this.fieldKind);
+    value.set(this.fieldValue);
     this.fieldStart = start;
     this.fieldEnd = end;
     this.fieldKind = kind;
+    this.fieldValue = value;
   }
 }
+
+/** Bytes a decimal number is written with: signs, point, exponent marks, digits. */
+const NUMBER_BYTES = [0x2b, 0x2d, 0x2e, 0x45, 0x65, 0x30, 0x31, 0x32, 0x33, 0x34, 0x35, 0x36, 0x37, 0x38, 0x39];
 
 /** Exact powers of ten (every one up to 1e22 is a double exactly). */
 const POW10 = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22];

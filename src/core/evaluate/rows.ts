@@ -41,30 +41,60 @@ export function rowContributions(plan: Plan, ref: RowRef): Contribution[] {
   return [...byCase.values()].filter((c) => c.factor !== 0).sort((a, b) => a.caseIndex - b.caseIndex);
 }
 
+/** Scratch for rowFactorText: the factor on each case and whether a term loads it (cleared after each use). */
+let caseFactors = new Float64Array(64);
+let caseSeen = new Uint8Array(64);
+
 /** The row's factors in the ruleset's symbol order, with the cases of a summed symbol shown as the symbol. */
 export function rowFactorText(plan: Plan, ref: RowRef): string {
-  const factors = new Map(rowContributions(plan, ref).map((c) => [c.caseIndex, c.factor]));
-  const parts: { factor: number; name: string }[] = [];
+  // The factor on each case, added in rowContributions' order; a case is loaded where its sum is not 0.
+  const branch = plan.combinations[ref.combination].branches[ref.branch];
+  if (caseSeen.length < plan.cases.length) {
+    caseFactors = new Float64Array(plan.cases.length);
+    caseSeen = new Uint8Array(plan.cases.length);
+  }
+  const factors = caseFactors;
+  const seen = caseSeen;
+  for (let t = 0; t < branch.terms.length; t++) {
+    for (const c of branch.terms[t].options[ref.choices[t]].contributions) {
+      const i = c.caseIndex;
+      if (seen[i] === 0) {
+        seen[i] = 1;
+        factors[i] = c.factor;
+      } else factors[i] += c.factor;
+    }
+  }
+  let text = "";
   for (const symbol of plan.ruleset.symbols) {
-    const indices = (plan.casesOf.get(symbol.name) ?? []).filter((i) => factors.has(i));
-    if (indices.length === 0) continue;
-    const all = plan.casesOf.get(symbol.name) ?? [];
-    const first = factors.get(indices[0]) as number;
-    if (indices.length === all.length && indices.length > 1 && indices.every((i) => factors.get(i) === first)) {
-      parts.push({ factor: first, name: symbol.name });
+    const all = plan.casesOf.get(symbol.name);
+    if (all === undefined) continue;
+    let count = 0;
+    let alike = true;
+    let first = 0;
+    for (const i of all) {
+      if (seen[i] === 0 || factors[i] === 0) continue;
+      if (count === 0) first = factors[i];
+      else if (factors[i] !== first) alike = false;
+      count++;
+    }
+    if (count === 0) continue;
+    if (count === all.length && count > 1 && alike) {
+      text = withFactor(text, first, symbol.name);
       continue;
     }
-    for (const i of indices) parts.push({ factor: factors.get(i) as number, name: plan.cases[i].header });
+    for (const i of all) if (seen[i] === 1 && factors[i] !== 0) text = withFactor(text, factors[i], plan.cases[i].header);
   }
-  if (parts.length === 0) return "(no load)";
-  return parts
-    .map((p, k) => {
-      const size = Math.abs(p.factor);
-      const coefficient = size === 1 ? "" : formatNumber(size);
-      const sign = p.factor < 0 ? (k === 0 ? "-" : " - ") : k === 0 ? "" : " + ";
-      return `${sign}${coefficient}${p.name}`;
-    })
-    .join("");
+  for (let t = 0; t < branch.terms.length; t++) for (const c of branch.terms[t].options[ref.choices[t]].contributions) seen[c.caseIndex] = 0;
+  return text === "" ? "(no load)" : text;
+}
+
+/** The text so far and one more factor on a case or symbol: "1.2D", " + 1.6L", " - W:N". */
+function withFactor(text: string, factor: number, name: string): string {
+  const size = Math.abs(factor);
+  const coefficient = size === 1 ? "" : formatNumber(size);
+  const first = text === "";
+  const sign = factor < 0 ? (first ? "-" : " - ") : first ? "" : " + ";
+  return `${text}${sign}${coefficient}${name}`;
 }
 
 /** A row's label, written once per plan and row (a long export names the same few rows again and again). */

@@ -10,7 +10,7 @@
  * order, so "first option wins" still names the same row, and each option's
  * factors keep the plan's order, so every value is summed exactly as before.
  */
-import type { Plan, RowRef } from "./types.js";
+import type { Plan, RowRef, TermOption } from "./types.js";
 
 export interface CompiledPlan {
   plan: Plan;
@@ -64,12 +64,23 @@ export function compiledPlanOf(plan: Plan): CompiledPlan {
   return c;
 }
 
+/** A double's two 32-bit halves, for hashing a factor (0 and −0, which are the same factor, hashed alike). */
+const factorBits = new Float64Array(1);
+const factorHalves = new Int32Array(factorBits.buffer);
+
+function mix(h: number, x: number): number {
+  return Math.imul(h ^ x, 0x01000193);
+}
+
 export function compilePlan(plan: Plan): CompiledPlan {
-  const optionIds = new Map<string, number>();
+  // Options and terms found again by a hash of their content, confirmed by comparing it: no key text per option.
+  const optionIds = new Map<number, number[]>();
+  let optionCount = 0;
   const optionStart: number[] = [0];
   const optionCase: number[] = [];
   const optionFactor: number[] = [];
-  const termIds = new Map<string, number>();
+  const termIds = new Map<number, number[]>();
+  let termCount = 0;
   const termStart: number[] = [0];
   const termOptions: number[] = [];
   const branchStart: number[] = [0];
@@ -82,33 +93,61 @@ export function compilePlan(plan: Plan): CompiledPlan {
   let maxTerms = 0;
   let rows = 0;
 
+  const optionId = (option: TermOption): number => {
+    const cs = option.contributions;
+    let h = 0x811c9dc5 | 0;
+    for (const x of cs) {
+      factorBits[0] = x.factor === 0 ? 0 : x.factor;
+      h = mix(mix(mix(h, x.caseIndex), factorHalves[0]), factorHalves[1]);
+    }
+    let bucket = optionIds.get(h);
+    if (bucket === undefined) optionIds.set(h, (bucket = []));
+    else {
+      // The same option: the same cases with the same factors, in the same order.
+      for (const id of bucket) {
+        const first = optionStart[id];
+        if (optionStart[id + 1] - first !== cs.length) continue;
+        let k = 0;
+        while (k < cs.length && optionCase[first + k] === cs[k].caseIndex && optionFactor[first + k] === cs[k].factor) k++;
+        if (k === cs.length) return id;
+      }
+    }
+    const id = optionCount++;
+    bucket.push(id);
+    for (const x of cs) {
+      optionCase.push(x.caseIndex);
+      optionFactor.push(x.factor);
+    }
+    optionStart.push(optionCase.length);
+    return id;
+  };
+
+  const termId = (options: number[]): number => {
+    let h = 0x811c9dc5 | 0;
+    for (const o of options) h = mix(h, o);
+    let bucket = termIds.get(h);
+    if (bucket === undefined) termIds.set(h, (bucket = []));
+    else {
+      for (const id of bucket) {
+        const first = termStart[id];
+        if (termStart[id + 1] - first !== options.length) continue;
+        let k = 0;
+        while (k < options.length && termOptions[first + k] === options[k]) k++;
+        if (k === options.length) return id;
+      }
+    }
+    const id = termCount++;
+    bucket.push(id);
+    // A loop, not a spread: a term may have 200,000 options (100,000 cases of a reversible symbol).
+    for (const o of options) termOptions.push(o);
+    termStart.push(termOptions.length);
+    return id;
+  };
+
   plan.combinations.forEach((planned, c) => {
     combinationBranch.push(branchCombination.length);
     planned.branches.forEach((branch, b) => {
-      const ids = branch.terms.map((term) => {
-        const options = term.options.map((option) => {
-          const key = option.contributions.map((x) => `${x.caseIndex}:${x.factor}`).join(",");
-          let id = optionIds.get(key);
-          if (id === undefined) {
-            optionIds.set(key, (id = optionIds.size));
-            for (const x of option.contributions) {
-              optionCase.push(x.caseIndex);
-              optionFactor.push(x.factor);
-            }
-            optionStart.push(optionCase.length);
-          }
-          return id;
-        });
-        const key = options.join(",");
-        let id = termIds.get(key);
-        if (id === undefined) {
-          termIds.set(key, (id = termIds.size));
-          // A loop, not a spread: a term may have 200,000 options (100,000 cases of a reversible symbol).
-          for (const o of options) termOptions.push(o);
-          termStart.push(termOptions.length);
-        }
-        return id;
-      });
+      const ids = branch.terms.map((term) => termId(term.options.map(optionId)));
       for (const t of ids) branchTerms.push(t);
       branchStart.push(branchTerms.length);
       branchCombination.push(c);
@@ -132,11 +171,11 @@ export function compilePlan(plan: Plan): CompiledPlan {
   return {
     plan,
     caseCount: plan.cases.length,
-    optionCount: optionIds.size,
+    optionCount,
     optionStart: Int32Array.from(optionStart),
     optionCase: Int32Array.from(optionCase),
     optionFactor: Float64Array.from(optionFactor),
-    termCount: termIds.size,
+    termCount,
     termStart: Int32Array.from(termStart),
     termOptions: Int32Array.from(termOptions),
     branchCount: branchCombination.length,

@@ -133,8 +133,21 @@ function render(a: Arith, choice: ChoiceAssignment, parent: number): string {
   }
 }
 
+/** Texts of numbers already written: a ruleset's few factors are written again in every label and explanation. */
+const written = new Map<number, string>();
+const WRITTEN_LIMIT = 4096;
+
 /** Numbers as an engineer writes them: 1.42, not 1.4200000000000002; no exponent for ordinary sizes. */
 export function formatNumber(value: number): string {
+  let text = written.get(value);
+  if (text === undefined) {
+    if (written.size >= WRITTEN_LIMIT) written.clear();
+    written.set(value, (text = numberWritten(value)));
+  }
+  return text;
+}
+
+function numberWritten(value: number): string {
   if (value === 0) return "0";
   const rounded = Number(value.toPrecision(12));
   const abs = Math.abs(rounded);

@@ -9,8 +9,16 @@ import fc from "fast-check";
 import { expect, test } from "vitest";
 import { idTable } from "../../../src/core/cases/idTable.js";
 
-/** Short ids from a few characters (so that ids repeat), longer ones, and characters beyond Latin-1. */
-const id = fc.oneof(fc.string({ unit: fc.constantFrom("a", "b", "1", " ", "/"), maxLength: 4 }), fc.string({ maxLength: 20 }), fc.string({ unit: "grapheme", maxLength: 6 }));
+/**
+ * Short ids from a few characters (so that ids repeat), longer ones, characters beyond Latin-1, and the code
+ * units next to the one the table's bytes mark a wide code unit with (0xff), which must not make two ids alike.
+ */
+const id = fc.oneof(
+  fc.string({ unit: fc.constantFrom("a", "b", "1", " ", "/"), maxLength: 4 }),
+  fc.string({ maxLength: 20 }),
+  fc.string({ unit: "grapheme", maxLength: 6 }),
+  fc.string({ unit: fc.constantFrom("\u00ff", "\u00fe", "\u0100", "\uff00", "\uffff", "\u0000", "a"), maxLength: 5 }),
+);
 
 test("says where an id was first seen exactly as a Map would, through every growth of the table", () => {
   fc.assert(
