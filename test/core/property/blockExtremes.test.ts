@@ -14,13 +14,13 @@
  */
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
-import { loadRuleset, planForTable, readCaseTable, type Plan } from "../../../src/core/index.js";
+import type { Plan } from "../../../src/core/index.js";
 import { compilePlan, rowKey, type CompiledPlan } from "../../../src/core/plan/compiledPlan.js";
 import { makeBlockPlan } from "../../../src/core/plan/blockPlan.js";
 import { blockExtremesEvaluator, extremesBlock } from "../../../src/core/evaluate/blockExtremes.js";
 import { extremesEvaluator } from "../../../src/core/evaluate/extremes.js";
 import type { Contribution, PlannedTerm, TermOption } from "../../../src/core/plan/types.js";
-import { caseHeaders, caseTable, rulesetFile } from "./randomRulesets.js";
+import { plannedTable } from "./randomRulesets.js";
 
 /** Block and row-by-row evaluation of `rows` (caseCount values each) agree in everything they report. */
 function expectSameAsGeneral(compiled: CompiledPlan, values: Float64Array, rows: number): void {
@@ -68,21 +68,14 @@ function expectSameAsGeneral(compiled: CompiledPlan, values: Float64Array, rows:
 
 describe("the block evaluator", () => {
   test("gives what the compiled plan's evaluator gives on random rulesets and tables", () => {
-    const scenario = fc.tuple(rulesetFile, caseHeaders).chain(([file, headers]) => caseTable(headers).map((matrix) => ({ file, matrix })));
     fc.assert(
-      fc.property(scenario, ({ file, matrix }) => {
-        const ruleset = loadRuleset(file);
-        if (!ruleset.ok) throw new Error("generated ruleset refused");
-        const table = readCaseTable(matrix, ruleset.value, { orientation: "rows" });
-        if (!table.ok) throw new Error("generated table refused");
-        const plan = planForTable(ruleset.value, {}, table.value);
-        if (!plan.ok) throw new Error("plan refused");
-        const compiled = compilePlan(plan.value);
-        const cases = table.value.cases.length;
+      fc.property(plannedTable, ({ table, plan }) => {
+        const compiled = compilePlan(plan);
+        const cases = table.cases.length;
         // The table's components, and all zeros (every row ties).
-        const rows = table.value.values.length + 1;
+        const rows = table.values.length + 1;
         const values = new Float64Array(rows * cases);
-        table.value.values.forEach((x, n) => values.set(x, n * cases));
+        table.values.forEach((x, n) => values.set(x, n * cases));
         expectSameAsGeneral(compiled, values, rows);
       }),
       { numRuns: 1000, seed: 20261204 },

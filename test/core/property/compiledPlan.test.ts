@@ -9,9 +9,9 @@
  */
 import fc from "fast-check";
 import { expect, test } from "vitest";
-import { loadRuleset, planForTable, readCaseTable, type Plan } from "../../../src/core/index.js";
+import type { Plan } from "../../../src/core/index.js";
 import { compilePlan } from "../../../src/core/plan/compiledPlan.js";
-import { caseHeaders, caseTable, rulesetFile } from "./randomRulesets.js";
+import { plannedTable } from "./randomRulesets.js";
 
 /** Options and terms numbered by key texts, in the order they are first met. */
 function byKeyText(plan: Plan): { options: string[]; terms: string[]; branches: number[][] } {
@@ -38,17 +38,10 @@ function byKeyText(plan: Plan): { options: string[]; terms: string[]; branches: 
 }
 
 test("the compiled plan's distinct options and terms are those key texts find, in the same order", () => {
-  const scenario = fc.tuple(rulesetFile, caseHeaders).chain(([file, headers]) => caseTable(headers).map((matrix) => ({ file, matrix })));
   fc.assert(
-    fc.property(scenario, ({ file, matrix }) => {
-      const ruleset = loadRuleset(file);
-      if (!ruleset.ok) throw new Error("generated ruleset refused");
-      const table = readCaseTable(matrix, ruleset.value, { orientation: "rows" });
-      if (!table.ok) throw new Error("generated table refused");
-      const plan = planForTable(ruleset.value, {}, table.value);
-      if (!plan.ok) throw new Error("plan refused");
-      const compiled = compilePlan(plan.value);
-      const expected = byKeyText(plan.value);
+    fc.property(plannedTable, ({ plan }) => {
+      const compiled = compilePlan(plan);
+      const expected = byKeyText(plan);
       const options: string[] = [];
       for (let o = 0; o < compiled.optionCount; o++) {
         const parts: string[] = [];

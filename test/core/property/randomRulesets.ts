@@ -5,7 +5,7 @@
  * both-ways terms, marks, lead/others, functions and powers — over symbols of every kind.
  */
 import fc from "fast-check";
-import { RULESET_FORMAT, type RulesetFile } from "../../../src/core/index.js";
+import { loadRuleset, planForTable, readCaseTable, RULESET_FORMAT, type CaseTable, type Plan, type RulesetFile } from "../../../src/core/index.js";
 
 /** The symbol pool: one of each kind the engine distinguishes (numbers invented for testing). */
 export const SYMBOLS: RulesetFile["symbols"] = {
@@ -88,3 +88,17 @@ export function caseTable(headers: string[]): fc.Arbitrary<(string | number | nu
       .map((values) => [["", ...Array.from({ length: components }, (_, c) => `V${c + 1}`)], ...headers.map((h, r) => [h, ...values[r]])]),
   );
 }
+
+/** A random ruleset with a case table for it, read and planned (a pair the engine refuses is a defect of these generators). */
+export const plannedTable: fc.Arbitrary<{ table: CaseTable; plan: Plan }> = fc
+  .tuple(rulesetFile, caseHeaders)
+  .chain(([file, headers]) => caseTable(headers).map((matrix) => ({ file, matrix })))
+  .map(({ file, matrix }) => {
+    const ruleset = loadRuleset(file);
+    if (!ruleset.ok) throw new Error("generated ruleset refused");
+    const table = readCaseTable(matrix, ruleset.value, { orientation: "rows" });
+    if (!table.ok) throw new Error("generated table refused");
+    const plan = planForTable(ruleset.value, {}, table.value);
+    if (!plan.ok) throw new Error("plan refused");
+    return { table: table.value, plan: plan.value };
+  });
