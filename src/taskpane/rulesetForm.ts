@@ -503,6 +503,8 @@ function provenanceSection(fc: FormContext): HTMLElement {
         doc,
         textField(fc, { label: "Source (standard, edition, clause or page)", path: path("source"), multiline: true }),
         textField(fc, { label: "Where a checker finds it (title, issuing body, address, clause)", path: path("locator"), optional: true, multiline: true }),
+        textField(fc, { label: "Web address (https://…)", path: path("address"), optional: true }),
+        textField(fc, { label: "Document number (ISBN, report or permit number)", path: path("document"), optional: true }),
         selectField(fc, {
           label: "Status",
           path: path("status"),

@@ -5,7 +5,7 @@
  * provenance entry, and the verification word follows from the entries alone.
  */
 import { describe, expect, test } from "vitest";
-import { shippedRulesets } from "../../src/core/index.js";
+import { loadRuleset, shippedRulesets } from "../../src/core/index.js";
 
 const shipped = shippedRulesets().map((s) => [s.id, s] as const);
 
@@ -17,6 +17,13 @@ describe.each(shipped)("%s provenance", (_id, s) => {
       expect(entry.locator, entry.source).toBeDefined();
       // An address a browser opens, or a document number a library finds.
       expect(entry.locator, entry.source).toMatch(/https?:\/\/\S+|\bISBN\b|\bdoc(ument)?\.? ?(no\.?|number)\b|\bNo\. ?\S+/i);
+    }
+  });
+
+  test("every confirmed source gives an address to open or a document number to look up, the address also in its locator", () => {
+    for (const entry of file.provenance.filter((p) => p.status === "confirmed")) {
+      expect(entry.address ?? entry.document, entry.source).toBeDefined();
+      if (entry.address) expect(entry.locator, entry.source).toContain(entry.address);
     }
   });
 
@@ -35,6 +42,26 @@ describe.each(shipped)("%s provenance", (_id, s) => {
     for (const entry of file.provenance.filter((p) => p.status === "from-memory")) {
       // Not "all" or "various": the parts an engineer must check, in words.
       expect(entry.covers.length, entry.source).toBeGreaterThan(20);
+    }
+  });
+});
+
+describe("a source's address", () => {
+  const withAddress = (address: string) => {
+    const file = structuredClone(shippedRulesets()[0].ruleset.file);
+    file.provenance[0] = { ...file.provenance[0], address };
+    return loadRuleset(file);
+  };
+
+  test("is taken as a web address", () => {
+    expect(withAddress("https://example.org/code/1605.2").ok).toBe(true);
+  });
+
+  test("is refused at its place where it is not one", () => {
+    for (const address of ["example.org/code", "https://example.org/a b", "ftp://example.org/x", "https://example.org/<x>"]) {
+      const loaded = withAddress(address);
+      expect(loaded.ok, address).toBe(false);
+      if (!loaded.ok) expect(loaded.problems.map((p) => p.message).join("; "), address).toContain("must be a web address");
     }
   });
 });

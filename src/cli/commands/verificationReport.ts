@@ -82,7 +82,10 @@ async function rulesetSection(s: ShippedRuleset, format: "table" | "md", io: Io)
     const named = entry.combinations && entry.combinations.length > 0 ? ` Combinations: ${entry.combinations.join(", ")}.` : "";
     if (entry.status === "confirmed") {
       const where = entry.locator ?? "no locator given";
-      io.out.line(md ? `- [${index + 1}] **${mdText(entry.source)}** (confirmed): ${mdText(where)}. Vouches for: ${mdText(entry.covers)}.${named}` : `  [${index + 1}] confirmed: ${entry.source} — ${where}`);
+      // The schema keeps spaces, quotes and angle brackets out of an address, so it stands as a Markdown autolink.
+      const follow = [entry.address ? `Address: ${md ? `<${entry.address}>` : entry.address}.` : "", entry.document ? `Document: ${md ? mdText(entry.document) : entry.document}.` : ""].filter(Boolean).join(" ");
+      io.out.line(md ? `- [${index + 1}] **${mdText(entry.source)}** (confirmed): ${mdText(where)}.${follow ? ` ${follow}` : ""} Vouches for: ${mdText(entry.covers)}.${named}` : `  [${index + 1}] confirmed: ${entry.source} — ${where}`);
+      if (!md && follow) io.out.line(`      ${follow}`);
       if (!md) io.out.line(`      vouches for: ${entry.covers}.${named}`);
     } else {
       const note = entry.note ? ` (${entry.note})` : "";
@@ -125,6 +128,8 @@ function verificationJson(s: ShippedRuleset) {
       status: p.status,
       source: p.source,
       ...(p.locator ? { locator: p.locator } : {}),
+      ...(p.address ? { address: p.address } : {}),
+      ...(p.document ? { document: p.document } : {}),
       covers: p.covers,
       combinations: p.combinations ?? [],
       ...(p.note ? { note: p.note } : {}),

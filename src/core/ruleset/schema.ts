@@ -93,6 +93,13 @@ export const provenanceSchema = z.strictObject({
    * number, and the clause it quotes. Every shipped "confirmed" entry has one.
    */
   locator: text.optional(),
+  /** The web address a checker opens first; the locator names any further pages. */
+  address: z
+    .string()
+    .regex(/^https?:\/\/[^\s<>"]+$/, "must be a web address (https://…) without spaces, quotes or angle brackets")
+    .optional(),
+  /** A number a checker can look a document up by (ISBN, report, permit or document number). */
+  document: text.optional(),
   /** "confirmed": checked against the source; "from-memory": recalled, to be verified. */
   status: provenanceStatusSchema,
   /** Which parts of the ruleset this source covers, in words. */
