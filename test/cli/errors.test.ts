@@ -8,7 +8,7 @@ import { mkdtempSync, writeFileSync, readFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, test } from "vitest";
-import { FIXTURES, loadwright } from "./harness.js";
+import { errorLines, FIXTURES, loadwright } from "./harness.js";
 
 let dir: string;
 
@@ -22,13 +22,6 @@ function file(name: string, text: string): string {
   return name;
 }
 
-/** The run's error lines: what follows "loadwright: error:" on standard error. */
-function errorLines(stderr: string): string[] {
-  return stderr
-    .split("\n")
-    .filter((l) => l.startsWith("loadwright: error: "))
-    .map((l) => l.slice("loadwright: error: ".length));
-}
 
 async function refused(args: string[]) {
   const run = await loadwright(args, { cwd: dir });

@@ -100,6 +100,14 @@ export async function loadwright(args: string[], options: { cwd?: string; env?: 
 }
 
 /** A CSV output of the command line, parsed by csv-parse. */
+/** The error lines of a run, without their "loadwright: error: " prefix. */
+export function errorLines(stderr: string): string[] {
+  return stderr
+    .split("\n")
+    .filter((l) => l.startsWith("loadwright: error: "))
+    .map((l) => l.slice("loadwright: error: ".length));
+}
+
 export function csvRows(text: string): string[][] {
   return parse(text, { relax_column_count: false }) as string[][];
 }

@@ -9,7 +9,7 @@ import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, test } from "vitest";
-import { FIXTURES, loadwright } from "./harness.js";
+import { errorLines, FIXTURES, loadwright } from "./harness.js";
 
 let dir: string;
 const fixture = JSON.parse(readFileSync(join(FIXTURES, "strength-fixture.json"), "utf8")) as { combinations: { expression: string }[] };
@@ -45,10 +45,7 @@ async function refused(args: string[]): Promise<string[]> {
   expect(run.stderr).not.toMatch(/internal error/);
   expect(run.stderr).not.toMatch(/^\s+at /m);
   expect(run.status).toBe(1);
-  return run.stderr
-    .split("\n")
-    .filter((l) => l.startsWith("loadwright: error: "))
-    .map((l) => l.slice("loadwright: error: ".length));
+  return errorLines(run.stderr);
 }
 
 describe("hostile rulesets", () => {

@@ -13,7 +13,7 @@ import { join } from "node:path";
 import { beforeAll, describe, expect, test } from "vitest";
 import { ENVELOPE } from "../../src/functions/formulas/envelopeFormula.js";
 import { body, evaluateFormula, value } from "../functions/outcome.js";
-import { csvRows, loadwright } from "./harness.js";
+import { csvRows, errorLines, loadwright } from "./harness.js";
 
 let dir: string;
 beforeAll(() => {
@@ -34,7 +34,6 @@ async function throughEveryPath(name: string, table: (string | number)[][]) {
   return { csv, json, formula };
 }
 
-const errorsOf = (stderr: string) => stderr.split("\n").filter((l) => l.startsWith("loadwright: error: ")).map((l) => l.slice("loadwright: error: ".length));
 
 describe("a result id given twice", () => {
   test("is refused alike in a streamed CSV file, a JSON file and a formula, with both places", async () => {
@@ -46,15 +45,15 @@ describe("a result id given twice", () => {
     ]);
     expect(csv.status).toBe(1);
     // Streamed, the rows before it have been written: the exit status says the output is incomplete (docs/command-line.md).
-    expect(errorsOf(csv.stderr)).toEqual(['twice.csv line 4, column A (B1): result "B1" appears twice (also at line 2, column A)']);
+    expect(errorLines(csv.stderr)).toEqual(['twice.csv line 4, column A (B1): result "B1" appears twice (also at line 2, column A)']);
     expect(json.status).toBe(1);
-    expect(errorsOf(json.stderr)).toEqual(['twice.json line 1, column 46 (B1): result "B1" appears twice (also at line 1, column 22)']);
+    expect(errorLines(json.stderr)).toEqual(['twice.json line 1, column 46 (B1): result "B1" appears twice (also at line 1, column 22)']);
     expect(formula.ok).toBe(false);
     if (formula.ok) return;
     expect(formula.message).toBe('cases, Loads!A4: result "B1" appears twice (also at Loads!A2)');
     // The sentence itself is the core's, word for word, on every path.
     const sentence = (text: string) => text.replace(/^.*: (result ".*" appears twice) \(also at .*\)$/, "$1");
-    expect(new Set([...errorsOf(csv.stderr), ...errorsOf(json.stderr), formula.message].map(sentence))).toEqual(new Set(['result "B1" appears twice']));
+    expect(new Set([...errorLines(csv.stderr), ...errorLines(json.stderr), formula.message].map(sentence))).toEqual(new Set(['result "B1" appears twice']));
   });
 });
 
@@ -79,8 +78,8 @@ describe("a value that is not a number", () => {
       ["result", "G", "Q"],
       ["B1", 10, "n/a"],
     ]);
-    expect(errorsOf(csv.stderr)).toEqual(['text.csv line 2, column C (Q): "n/a" is not a number']);
-    expect(errorsOf(json.stderr)).toEqual(['text.json line 1, column 30 (Q): "n/a" is not a number']);
+    expect(errorLines(csv.stderr)).toEqual(['text.csv line 2, column C (Q): "n/a" is not a number']);
+    expect(errorLines(json.stderr)).toEqual(['text.json line 1, column 30 (Q): "n/a" is not a number']);
     expect(!formula.ok && formula.message).toBe('cases, Loads!C2 (Q): "n/a" is not a number');
   });
 });
@@ -92,7 +91,7 @@ describe("a streamed file with a bad row", () => {
     writeFileSync(join(dir, "bad-late.csv"), lines.join("\n") + "\n");
     const run = await loadwright(["envelope", "bad-late.csv", "--ruleset", RULESET, "--format", "csv"], { cwd: dir });
     expect(run.status).toBe(1);
-    expect(errorsOf(run.stderr)).toEqual(['bad-late.csv line 2502, column C (Q): "n/a" is not a number']);
+    expect(errorLines(run.stderr)).toEqual(['bad-late.csv line 2502, column C (Q): "n/a" is not a number']);
     const rows = csvRows(run.stdout);
     expect(rows[0]).toEqual(["result", "max", "max row", "min", "min row"]);
     expect(rows.slice(1).map((r) => r[0])).toEqual(Array.from({ length: 2500 }, (_, i) => `R${i + 1}`));

@@ -17,7 +17,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import ExcelJS from "exceljs";
 import { beforeAll, describe, expect, test } from "vitest";
-import { csvRows, FIXTURES, loadwright } from "./harness.js";
+import { csvRows, errorLines, FIXTURES, loadwright } from "./harness.js";
 
 let dir: string;
 const RULES = ["--ruleset", join(FIXTURES, "strength-fixture.json")];
@@ -54,12 +54,6 @@ function file(name: string, text: string): string {
   return name;
 }
 
-function errorLines(stderr: string): string[] {
-  return stderr
-    .split("\n")
-    .filter((l) => l.startsWith("loadwright: error: "))
-    .map((l) => l.slice("loadwright: error: ".length));
-}
 
 async function refused(args: string[]): Promise<string[]> {
   const run = await loadwright(args, { cwd: dir });

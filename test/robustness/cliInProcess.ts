@@ -36,13 +36,7 @@ export async function cliInProcess(args: string[]): Promise<CliOutcome> {
   return { status, stdout: out.text(), stderr: err.text() };
 }
 
-/** The error lines of a run, without their "loadwright: error: " prefix. */
-export function errorLines(stderr: string): string[] {
-  return stderr
-    .split("\n")
-    .filter((l) => l.startsWith("loadwright: error: "))
-    .map((l) => l.slice("loadwright: error: ".length));
-}
+export { errorLines } from "../cli/harness.js";
 
 /** A folder of one's own for generated files, and a writer of numbered files in it. */
 export function scratch(prefix: string): { dir: string; file(extension: string, content: string | Buffer): string } {
