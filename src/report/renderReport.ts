@@ -114,22 +114,16 @@ function parametersSection(report: CalcReport): Html {
     "section",
     { id: "parameters" },
     el("h2", null, "Parameters in force"),
-    el(
-      "table",
-      null,
-      el("thead", null, el("tr", null, el("th", null, "parameter"), el("th", { class: "num" }, "value"), el("th", null, "given or default"), el("th", null, "meaning"))),
-      el(
-        "tbody",
-        null,
-        report.parameters.map((p) =>
-          el(
-            "tr",
-            { "data-parameter": p.name },
-            el("td", null, p.name),
-            typeof p.value === "number" ? num(p.value, givenText(p.value)) : el("td", { class: "num" }, p.value),
-            el("td", null, p.given ? "given" : "default"),
-            el("td", null, p.description),
-          ),
+    dataTable(
+      el("tr", null, el("th", null, "parameter"), el("th", { class: "num" }, "value"), el("th", null, "given or default"), el("th", null, "meaning")),
+      report.parameters.map((p) =>
+        el(
+          "tr",
+          { "data-parameter": p.name },
+          el("td", null, p.name),
+          typeof p.value === "number" ? num(p.value, givenText(p.value)) : el("td", { class: "num" }, p.value),
+          el("td", null, p.given ? "given" : "default"),
+          el("td", null, p.description),
         ),
       ),
     ),
@@ -174,7 +168,7 @@ function caseTableSection(report: CalcReport): Html {
     { id: "case-table", class: "page" },
     el("h2", null, "Case table"),
     el("p", null, `As read from ${report.request.file}: ${table.orientation === "columns" ? "one row per result, one column per load case" : "one row per load case, one column per result"}, values as given.`),
-    el("table", { class: wide ? "wide" : null }, el("thead", null, headRow), el("tbody", null, bodyRows)),
+    dataTable(headRow, bodyRows, wide),
   );
 }
 
@@ -194,7 +188,7 @@ function combinationsSection(report: CalcReport): Html {
     el("h2", null, "Combinations"),
     el("p", null, `${plan.rowCount.toLocaleString("en-US")} concrete rows from ${report.groups.length} combinations: every alternative, direction, sign and term left out that the ruleset allows, each with the factor on every case (blank: the case does not act in the row).`),
     report.listingSummary ? el("p", { class: "summary", "data-field": "listing-summary" }, report.listingSummary) : null,
-    el("table", { class: wide ? "wide" : null }, el("thead", null, head), el("tbody", null, body)),
+    dataTable(head, body, wide),
     skipped.length > 0
       ? fragment(
           el("h3", null, "Combinations that form no rows"),
@@ -202,6 +196,11 @@ function combinationsSection(report: CalcReport): Html {
         )
       : null,
   );
+}
+
+/** A table of one header row and its body rows; a wide one prints across the page (reportStyle.ts). */
+function dataTable(head: Html, body: Child, wide = false): Html {
+  return el("table", { class: wide ? "wide" : null }, el("thead", null, head), el("tbody", null, body));
 }
 
 function groupRows(g: CombinationGroup, caseCount: number): Child {
@@ -219,23 +218,17 @@ function envelopeSection(report: CalcReport): Html {
     { id: "envelope", class: "page" },
     el("h2", null, "Envelope"),
     el("p", null, `Per result, the largest and the smallest factored value over every concrete row, and the row giving each (${report.request.digits} significant digits).`),
-    el(
-      "table",
-      null,
-      el("thead", null, el("tr", null, el("th", null, "result"), el("th", { class: "num" }, "max"), el("th", null, "row giving the max"), el("th", { class: "num" }, "min"), el("th", null, "row giving the min"))),
-      el(
-        "tbody",
-        null,
-        report.envelope.map((e) =>
-          el(
-            "tr",
-            { "data-result": e.result },
-            el("td", null, e.result),
-            computed(report, e.max.value, { "data-field": "max" }),
-            el("td", { class: "label", "data-field": "max-row" }, e.max.label),
-            computed(report, e.min.value, { "data-field": "min" }),
-            el("td", { class: "label", "data-field": "min-row" }, e.min.label),
-          ),
+    dataTable(
+      el("tr", null, el("th", null, "result"), el("th", { class: "num" }, "max"), el("th", null, "row giving the max"), el("th", { class: "num" }, "min"), el("th", null, "row giving the min")),
+      report.envelope.map((e) =>
+        el(
+          "tr",
+          { "data-result": e.result },
+          el("td", null, e.result),
+          computed(report, e.max.value, { "data-field": "max" }),
+          el("td", { class: "label", "data-field": "max-row" }, e.max.label),
+          computed(report, e.min.value, { "data-field": "min" }),
+          el("td", { class: "label", "data-field": "min-row" }, e.min.label),
         ),
       ),
     ),
@@ -243,37 +236,26 @@ function envelopeSection(report: CalcReport): Html {
 }
 
 function governingSection(report: CalcReport): Html {
-  const { table } = report.request;
+  const { components } = report.request.table;
   if (report.governing.length === 0) return el("section", { id: "governing", class: "page" }, el("h2", null, "Governing rows"), el("p", null, report.governingNote ?? ""));
-  const legend = el(
-    "table",
-    null,
-    el("thead", null, el("tr", null, el("th", null, "row"), el("th", null, "criteria"), el("th", { class: "num" }, "criterion value"), el("th", null, "combination row"))),
-    el(
-      "tbody",
-      null,
-      report.governing.map((g, k) =>
-        el(
-          "tr",
-          { "data-governing": k },
-          el("td", null, `G${k + 1}`),
-          el("td", null, g.criteria.join("; ")),
-          el("td", { class: "num" }, g.criterionValues.map((v) => computedText(v, report.request.digits)).join("; ")),
-          el("td", { class: "label" }, g.label),
-        ),
+  const legend = dataTable(
+    el("tr", null, el("th", null, "row"), el("th", null, "criteria"), el("th", { class: "num" }, "criterion value"), el("th", null, "combination row")),
+    report.governing.map((g, k) =>
+      el(
+        "tr",
+        { "data-governing": k },
+        el("td", null, `G${k + 1}`),
+        el("td", null, g.criteria.join("; ")),
+        el("td", { class: "num" }, g.criterionValues.map((v) => computedText(v, report.request.digits)).join("; ")),
+        el("td", { class: "label" }, g.label),
       ),
     ),
   );
   // Concurrent values: the governing rows across, the results down (an export may have many results).
-  const concurrent = el(
-    "table",
-    { class: report.governing.length > WIDE_FROM_COLUMNS ? "wide" : null },
-    el("thead", null, el("tr", null, el("th", null, "result"), report.governing.map((_, k) => el("th", { class: "num" }, `G${k + 1}`)))),
-    el(
-      "tbody",
-      null,
-      table.components.map((c, r) => el("tr", { "data-result": c }, el("td", null, c), report.governing.map((g, k) => computed(report, g.values[r], { "data-governing": String(k) })))),
-    ),
+  const concurrent = dataTable(
+    el("tr", null, el("th", null, "result"), report.governing.map((_, k) => el("th", { class: "num" }, `G${k + 1}`))),
+    components.map((c, r) => el("tr", { "data-result": c }, el("td", null, c), report.governing.map((g, k) => computed(report, g.values[r], { "data-governing": String(k) })))),
+    report.governing.length > WIDE_FROM_COLUMNS,
   );
   return el(
     "section",
@@ -305,13 +287,9 @@ function derivationBlock(report: CalcReport, d: Derivation): Html {
     { class: "derivation", "data-governing": String(d.governing), "data-component": x.component, "data-total": String(x.total === 0 ? 0 : x.total) },
     el("h3", null, `G${d.governing + 1} · ${x.component} in row ${x.label}`),
     el("p", null, `Chosen by ${g.criteria.join("; ")}. Combination ${x.combination} (${x.clause}): ${x.expression}`),
-    el(
-      "table",
-      null,
-      el("thead", null, el("tr", null, el("th", null, "case"), el("th", { class: "num" }, "factor"), el("th", null, "factor from"), el("th", { class: "num" }, "case value"), el("th", { class: "num" }, "factor × case value"))),
-      el(
-        "tbody",
-        null,
+    dataTable(
+      el("tr", null, el("th", null, "case"), el("th", { class: "num" }, "factor"), el("th", null, "factor from"), el("th", { class: "num" }, "case value"), el("th", { class: "num" }, "factor × case value")),
+      [
         x.lines.map((l) =>
           el(
             "tr",
@@ -324,7 +302,7 @@ function derivationBlock(report: CalcReport, d: Derivation): Html {
           ),
         ),
         el("tr", { class: "sum" }, el("td", { colspan: 4 }, x.lines.length === 0 ? `${x.component}: no case acts in this row` : `${x.component} = sum`), computed(report, x.total, { "data-field": "total" })),
-      ),
+      ],
     ),
     x.parameters.length > 0 ? el("p", null, `Parameters read: ${x.parameters.map((p) => `${p.name} = ${typeof p.value === "number" ? givenText(p.value) : p.value} (${p.given ? "given" : "default"})`).join(", ")}.`) : null,
   );
