@@ -27,7 +27,7 @@ describe("allowedKeys", () => {
 
   test("gives the fields of an entry of a list and of the file itself", () => {
     expect(allowedKeys(rulesetSchema, input, ["combinations", 0])?.sort()).toEqual(["clause", "description", "expression", "id"]);
-    expect(allowedKeys(rulesetSchema, input, ["provenance", 0])?.sort()).toEqual(["combinations", "covers", "locator", "note", "source", "status"]);
+    expect(allowedKeys(rulesetSchema, input, ["provenance", 0])?.sort()).toEqual(["address", "combinations", "covers", "document", "locator", "note", "source", "status"]);
     expect(allowedKeys(rulesetSchema, input, [])).toContain("approval");
   });
 
